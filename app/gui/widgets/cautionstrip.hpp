@@ -1,0 +1,27 @@
+#pragma once
+// The caution strip: always on screen, above every panel. It may be folded to one line, never removed.
+#include <QFrame>
+
+class QLabel;
+class QToolButton;
+
+namespace beamwarden::gui {
+
+class CautionStrip : public QFrame {
+    Q_OBJECT
+public:
+    explicit CautionStrip(QWidget* parent = nullptr);
+
+    // The full caution text shown when unfolded (translated from core's caution()).
+    [[nodiscard]] QString cautionText() const;
+    [[nodiscard]] bool isFolded() const { return m_folded; }
+    void setFolded(bool folded);
+
+private:
+    QLabel* m_icon = nullptr;
+    QLabel* m_text = nullptr;
+    QToolButton* m_foldButton = nullptr;
+    bool m_folded = false;
+};
+
+} // namespace beamwarden::gui

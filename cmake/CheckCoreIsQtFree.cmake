@@ -1,0 +1,13 @@
+# Fails if any file under CORE_DIR includes a Qt header (<QFoo>, <QtCore/...>, "qglobal.h"...).
+file(GLOB_RECURSE files "${CORE_DIR}/*.hpp" "${CORE_DIR}/*.cpp" "${CORE_DIR}/*.h" "${CORE_DIR}/*.in")
+set(offenders "")
+foreach(f IN LISTS files)
+  file(STRINGS "${f}" hits REGEX "^[ \t]*#[ \t]*include[ \t]*[<\"](Q[A-Za-z]|Qt[A-Za-z]*/|q[a-z]*global)")
+  if(hits)
+    list(APPEND offenders "${f}: ${hits}")
+  endif()
+endforeach()
+if(offenders)
+  string(REPLACE ";" "\n  " msg "${offenders}")
+  message(FATAL_ERROR "core/ must not include Qt headers:\n  ${msg}")
+endif()
