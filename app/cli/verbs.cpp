@@ -1,6 +1,7 @@
 #include "verbs.hpp"
 
 #include "beamwarden/caution.hpp"
+#include "mpeverb.hpp"
 
 #include <fmt/core.h>
 
@@ -31,8 +32,17 @@ void printHelp()
 const std::vector<Verb>& verbs()
 {
     static const std::vector<Verb> all = {
-        {"help", "show this overview", [](const std::vector<std::string>&) { printHelp(); return kExitOk; }},
-        {"version", "show the program version", [](const std::vector<std::string>&) { printVersion(); return kExitOk; }},
+        {"mpe", "maximum permissible exposure: one wavelength, single exposure or pulse train", runMpe},
+        {"help", "show this overview",
+         [](const std::vector<std::string>&) {
+             printHelp();
+             return kExitOk;
+         }},
+        {"version", "show the program version",
+         [](const std::vector<std::string>&) {
+             printVersion();
+             return kExitOk;
+         }},
     };
     return all;
 }

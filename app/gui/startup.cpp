@@ -38,8 +38,8 @@ bool saveScreenshot(QWidget& window, const QString& path)
 StartupParse parseStartupOptions(const QStringList& arguments)
 {
     QCommandLineParser parser;
-    parser.setApplicationDescription(
-        QApplication::translate("Startup", "Beamwarden: exposure limits, hazard distances and eyewear for laser labs."));
+    parser.setApplicationDescription(QApplication::translate(
+        "Startup", "Beamwarden: exposure limits, hazard distances and eyewear for laser labs."));
     parser.addHelpOption();
     parser.addVersionOption();
     const QCommandLineOption demo(QStringLiteral("demo"), QApplication::translate("Startup", "Open the demo lab."));

@@ -7,13 +7,20 @@ namespace beamwarden::gui {
 QString panelTitle(Panel panel)
 {
     switch (panel) {
-    case Panel::Lasers: return QCoreApplication::translate("Panel", "Lasers");
-    case Panel::Eyewear: return QCoreApplication::translate("Panel", "Eyewear");
-    case Panel::Assessment: return QCoreApplication::translate("Panel", "Assessment");
-    case Panel::LimitCurves: return QCoreApplication::translate("Panel", "Limit curves");
-    case Panel::HazardSheet: return QCoreApplication::translate("Panel", "Hazard sheet");
-    case Panel::History: return QCoreApplication::translate("Panel", "History");
-    case Panel::Count: break;
+    case Panel::Lasers:
+        return QCoreApplication::translate("Panel", "Lasers");
+    case Panel::Eyewear:
+        return QCoreApplication::translate("Panel", "Eyewear");
+    case Panel::Assessment:
+        return QCoreApplication::translate("Panel", "Assessment");
+    case Panel::LimitCurves:
+        return QCoreApplication::translate("Panel", "Limit curves");
+    case Panel::HazardSheet:
+        return QCoreApplication::translate("Panel", "Hazard sheet");
+    case Panel::History:
+        return QCoreApplication::translate("Panel", "History");
+    case Panel::Count:
+        break;
     }
     return {};
 }
@@ -39,7 +46,8 @@ QString panelPurpose(Panel panel)
                                                     "as PDF.");
     case Panel::History:
         return QCoreApplication::translate("Panel", "Dated assessments and their sign-offs.");
-    case Panel::Count: break;
+    case Panel::Count:
+        break;
     }
     return {};
 }

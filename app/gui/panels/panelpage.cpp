@@ -12,13 +12,20 @@ namespace {
 QString emptyStateText(Panel panel)
 {
     switch (panel) {
-    case Panel::Lasers: return PanelPage::tr("No lasers in this lab yet.");
-    case Panel::Eyewear: return PanelPage::tr("No eyewear on the shelf yet.");
-    case Panel::Assessment: return PanelPage::tr("Select a laser to see its assessment.");
-    case Panel::LimitCurves: return PanelPage::tr("Select a laser to plot its limit curves.");
-    case Panel::HazardSheet: return PanelPage::tr("Select a laser to preview its hazard sheet.");
-    case Panel::History: return PanelPage::tr("No assessments recorded yet.");
-    case Panel::Count: break;
+    case Panel::Lasers:
+        return PanelPage::tr("No lasers in this lab yet.");
+    case Panel::Eyewear:
+        return PanelPage::tr("No eyewear on the shelf yet.");
+    case Panel::Assessment:
+        return PanelPage::tr("Select a laser to see its assessment.");
+    case Panel::LimitCurves:
+        return PanelPage::tr("Select a laser to plot its limit curves.");
+    case Panel::HazardSheet:
+        return PanelPage::tr("Select a laser to preview its hazard sheet.");
+    case Panel::History:
+        return PanelPage::tr("No assessments recorded yet.");
+    case Panel::Count:
+        break;
     }
     return {};
 }

@@ -50,10 +50,7 @@ public:
     [[nodiscard]] constexpr double microseconds() const requires std::same_as<Tag, DurationTag> { return m_si * 1e6; }
     [[nodiscard]] constexpr double nanoseconds() const requires std::same_as<Tag, DurationTag> { return m_si * 1e9; }
     [[nodiscard]] constexpr double picoseconds() const requires std::same_as<Tag, DurationTag> { return m_si * 1e12; }
-    [[nodiscard]] constexpr double femtoseconds() const requires std::same_as<Tag, DurationTag>
-    {
-        return m_si * 1e15;
-    }
+    [[nodiscard]] constexpr double femtoseconds() const requires std::same_as<Tag, DurationTag> { return m_si * 1e15; }
 
     [[nodiscard]] constexpr double joules() const requires std::same_as<Tag, EnergyTag> { return m_si; }
     [[nodiscard]] constexpr double millijoules() const requires std::same_as<Tag, EnergyTag> { return m_si * 1e3; }
@@ -95,14 +92,8 @@ public:
     [[nodiscard]] constexpr double megahertz() const requires std::same_as<Tag, FrequencyTag> { return m_si / 1e6; }
 
     [[nodiscard]] constexpr double squareMetres() const requires std::same_as<Tag, AreaTag> { return m_si; }
-    [[nodiscard]] constexpr double squareCentimetres() const requires std::same_as<Tag, AreaTag>
-    {
-        return m_si * 1e4;
-    }
-    [[nodiscard]] constexpr double squareMillimetres() const requires std::same_as<Tag, AreaTag>
-    {
-        return m_si * 1e6;
-    }
+    [[nodiscard]] constexpr double squareCentimetres() const requires std::same_as<Tag, AreaTag> { return m_si * 1e4; }
+    [[nodiscard]] constexpr double squareMillimetres() const requires std::same_as<Tag, AreaTag> { return m_si * 1e6; }
 
     constexpr Quantity& operator+=(Quantity other)
     {
@@ -129,10 +120,7 @@ public:
     [[nodiscard]] friend constexpr Quantity operator-(Quantity a, Quantity b) { return Quantity{a.m_si - b.m_si}; }
     [[nodiscard]] friend constexpr Quantity operator*(Quantity q, double factor) { return Quantity{q.m_si * factor}; }
     [[nodiscard]] friend constexpr Quantity operator*(double factor, Quantity q) { return Quantity{factor * q.m_si}; }
-    [[nodiscard]] friend constexpr Quantity operator/(Quantity q, double divisor)
-    {
-        return Quantity{q.m_si / divisor};
-    }
+    [[nodiscard]] friend constexpr Quantity operator/(Quantity q, double divisor) { return Quantity{q.m_si / divisor}; }
     // A ratio of like quantities has no unit, so it leaves the type system as a plain number.
     [[nodiscard]] friend constexpr double operator/(Quantity a, Quantity b) { return a.m_si / b.m_si; }
 
@@ -156,6 +144,7 @@ using Length = Quantity<LengthTag>;                   // m
 using Area = Quantity<AreaTag>;                       // m²
 
 // Cross-type arithmetic only where the physics is one multiplication: W·s = J, J/m² and W/m² per area, and so on.
+// clang-format off
 [[nodiscard]] constexpr Energy operator*(Power p, Duration t) { return Energy::fromSi(p.si() * t.si()); }
 [[nodiscard]] constexpr Energy operator*(Duration t, Power p) { return p * t; }
 [[nodiscard]] constexpr Power operator/(Energy e, Duration t) { return Power::fromSi(e.si() / t.si()); }
@@ -180,6 +169,7 @@ using Area = Quantity<AreaTag>;                       // m²
 [[nodiscard]] constexpr double operator*(Duration t, Frequency f) { return f * t; }
 // Time between pulses, 1/f in s. A zero frequency gives an infinite period; callers range-check first.
 [[nodiscard]] constexpr Duration period(Frequency f) { return Duration::fromSi(1.0 / f.si()); }
+// clang-format on
 
 // Literal rule: sub-millimetre metre literals (_nm, _um) give a Wavelength; millimetre and larger (_mm, _cm,
 // _m, _km) give a Length. For the rare far-infrared wavelength in mm, or a beam waist in µm, spell it out with
@@ -187,25 +177,26 @@ using Area = Quantity<AreaTag>;                       // m²
 namespace literals {
 
 namespace detail {
-    // Dividing by an exact power of ten is correctly rounded, where multiplying by an inexact 1e-9 is not; the
-    // parser scales the same way, so 800_nm and parseWavelength("800 nm") are the same double.
-    template <typename Q, int Exponent, typename Number>
-    [[nodiscard]] constexpr Q scaled(Number number)
-    {
-        double power = 1.0;
-        for (int i = 0; i < (Exponent < 0 ? -Exponent : Exponent); ++i)
-            power *= 10.0;
-        const auto value = static_cast<double>(number);
-        return Q::fromSi(Exponent < 0 ? value / power : value * power);
-    }
+// Dividing by an exact power of ten is correctly rounded, where multiplying by an inexact 1e-9 is not; the
+// parser scales the same way, so 800_nm and parseWavelength("800 nm") are the same double.
+template <typename Q, int Exponent, typename Number>
+[[nodiscard]] constexpr Q scaled(Number number)
+{
+    double power = 1.0;
+    for (int i = 0; i < (Exponent < 0 ? -Exponent : Exponent); ++i)
+        power *= 10.0;
+    const auto value = static_cast<double>(number);
+    return Q::fromSi(Exponent < 0 ? value / power : value * power);
+}
 
-    template <typename Q, typename Number>
-    [[nodiscard]] constexpr Q times(Number number, double factor)
-    {
-        return Q::fromSi(static_cast<double>(number) * factor);
-    }
+template <typename Q, typename Number>
+[[nodiscard]] constexpr Q times(Number number, double factor)
+{
+    return Q::fromSi(static_cast<double>(number) * factor);
+}
 } // namespace detail
 
+// clang-format off
 [[nodiscard]] constexpr Wavelength operator""_nm(long double v) { return detail::scaled<Wavelength, -9>(v); }
 [[nodiscard]] constexpr Wavelength operator""_nm(unsigned long long v) { return detail::scaled<Wavelength, -9>(v); }
 [[nodiscard]] constexpr Wavelength operator""_um(long double v) { return detail::scaled<Wavelength, -6>(v); }
@@ -283,6 +274,7 @@ namespace detail {
 {
     return detail::times<Angle>(v, std::numbers::pi / 180.0);
 }
+// clang-format on
 
 } // namespace literals
 
@@ -292,7 +284,7 @@ namespace detail {
 //   wavelength, length: pm nm µm mm cm m km        duration: fs ps ns µs ms s, min, h
 //   energy: fJ … kJ        power: fW … PW          frequency: mHz … THz (the "Hz" itself in any case)
 //   angle: nrad µrad mrad rad, deg or °           area: nm² … km², written m², m2 or m^2
-//   radiant exposure: [prefix]J per m², cm² or mm² (mJ/cm², J/m2, J/cm^2); irradiance likewise with W.
+//   radiant exposure: [prefix]J over an area unit (J/m², mJ/cm², J/cm^2); irradiance likewise with W.
 // The result is in SI units (m, s, J, W, J/m², W/m², rad, Hz, m²). Zero is accepted; callers check ranges.
 // Refusals name `field`, quote the text (trimmed; bytes that are not UTF-8 shown as U+FFFD) and say what
 // would be accepted.
