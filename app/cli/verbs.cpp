@@ -1,6 +1,7 @@
 #include "verbs.hpp"
 
 #include "beamwarden/caution.hpp"
+#include "hazardverbs.hpp"
 #include "mpeverb.hpp"
 
 #include <fmt/core.h>
@@ -33,6 +34,8 @@ const std::vector<Verb>& verbs()
 {
     static const std::vector<Verb> all = {
         {"mpe", "maximum permissible exposure: one wavelength, single exposure or pulse train", runMpe},
+        {"nohd", "nominal ocular hazard distance for one output and exposure case", runNohd},
+        {"od", "optical density eyewear must reach for one output and exposure case", runOd},
         {"help", "show this overview",
          [](const std::vector<std::string>&) {
              printHelp();

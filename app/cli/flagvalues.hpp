@@ -1,0 +1,29 @@
+#pragma once
+// Reading typed values from flags: each helper refuses with the flag's name, so every verb reports alike.
+#include "arguments.hpp"
+#include "beamwarden/units.hpp"
+
+#include <optional>
+
+namespace beamwarden::cli {
+
+// The flag's value parsed by `parse`, std::nullopt if the flag is absent, or the parser's error under the flag name.
+template <typename Q>
+Result<std::optional<Q>> optionalQuantity(const Arguments& args, const std::string& flag,
+                                          Result<Q> (*parse)(std::string_view, std::string_view))
+{
+    const auto text = args.value(flag);
+    if (!text)
+        return std::optional<Q>{};
+    const std::string name = "--" + flag;
+    auto value = parse(*text, name);
+    if (!value)
+        return std::unexpected(value.error());
+    return std::optional<Q>{*value};
+}
+
+// A plain number in [lo, hi], e.g. a reflectance or a numerical aperture.
+[[nodiscard]] Result<std::optional<double>> optionalNumber(const Arguments& args, const std::string& flag, double lo,
+                                                           double hi, const std::string& allowed);
+
+} // namespace beamwarden::cli

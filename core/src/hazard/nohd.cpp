@@ -1,0 +1,185 @@
+#include "nohd.hpp"
+
+#include "beamwarden/hazard/geometry.hpp"
+#include "beamwarden/limits/additivity.hpp"
+
+#include <cmath>
+#include <fmt/core.h>
+#include <functional>
+#include <numbers>
+
+namespace beamwarden::hazard {
+
+namespace {
+
+constexpr double kNearest_m = 1e-6;
+constexpr double kFarthest_m = 1e7; // 10 000 km: beyond it the model (clear air, no curvature) means nothing
+
+// Sum over the largest additive group of (power share / MPE): the output acts as one line with MPE 1/this.
+double inverseEffectiveLimit(const HazardResult& result)
+{
+    std::vector<limits::LineRatio> shares;
+    for (const LineResult& line : result.lines)
+        shares.push_back(limits::LineRatio{line.sample.wavelength, line.sample.powerFraction / line.limit});
+    return limits::combineLines(limits::Target::Eye, shares).governingSum;
+}
+
+HazardDistance zero(std::string model)
+{
+    return HazardDistance{DistanceKind::Zero, {}, {}, {}, {}, std::move(model)};
+}
+
+HazardDistance finite(double value, std::string model)
+{
+    HazardDistance d{DistanceKind::Finite, units::Length::fromSi(value), {}, {}, {}, std::move(model)};
+    return d;
+}
+
+// The largest r at which ratio(r) > 1, for a ratio that does not grow with distance (bisection in log r).
+HazardDistance solve(const std::function<double(double)>& ratio, std::string model)
+{
+    if (ratio(kFarthest_m) > 1.0)
+        return HazardDistance{DistanceKind::Unbounded, {}, {}, {}, {}, std::move(model)};
+    if (ratio(kNearest_m) <= 1.0)
+        return zero(std::move(model));
+    double lo = std::log(kNearest_m);
+    double hi = std::log(kFarthest_m);
+    for (int i = 0; i < 200 && hi - lo > 1e-13; ++i) {
+        const double mid = 0.5 * (lo + hi);
+        (ratio(std::exp(mid)) > 1.0 ? lo : hi) = mid;
+    }
+    return finite(std::exp(hi), std::move(model)); // the upper end: never short of the true distance
+}
+
+HazardDistance beamCase(double q, double a, double phi, double powerFactor)
+{
+    // q = 4 P / (pi MPE): the diameter^2 at which the on-axis peak equals the MPE.
+    const double reach = q * powerFactor;
+    if (reach <= a * a)
+        return zero("below the MPE from the exit on (4P/(pi MPE) <= a^2)");
+    if (phi <= 0.0)
+        return HazardDistance{DistanceKind::Unbounded, {}, {}, {}, {}, "collimated beam (zero divergence)"};
+    HazardDistance d = finite(std::sqrt(reach - a * a) / phi, "quadrature beam growth, d^2 = a^2 + (phi r)^2");
+    d.quadrature = d.value;
+    d.linear = units::Length::fromSi((std::sqrt(reach) - a) / phi);
+    return d;
+}
+
+} // namespace
+
+HazardDistance hazardDistance(const HazardRequest& request, const HazardResult& result)
+{
+    const model::Emission& e = request.emission;
+    const model::ExposureCase& c = request.exposureCase;
+    const double quantity = e.pulsed ? e.pulseEnergy.si() : e.averagePower.si();
+    const double invLimit = inverseEffectiveLimit(result);
+    const double a = request.beam.diameter63().si();
+    const double phi = request.beam.divergence63().si();
+    const double q = 4.0 * quantity * invLimit / std::numbers::pi;
+
+    switch (c.viewing) {
+    case model::Viewing::Direct:
+        return beamCase(q, a, phi, 1.0);
+    case model::Viewing::Specular: {
+        HazardDistance d = beamCase(q, a, phi, c.reflectance);
+        d.model += ", along the folded path from the laser";
+        return d;
+    }
+    case model::Viewing::Lens: {
+        // Beyond the focus the beam diverges with full angle b0/f from a point: (f/b0) sqrt(4P/(pi MPE)).
+        const double f = c.focalLength.si();
+        const double beyondFocus = f / a * std::sqrt(q);
+        return finite(f + beyondFocus, fmt::format("lens: (f/b0) sqrt(4P/(pi MPE)) = {} beyond the focus, "
+                                                   "plus the focal length",
+                                                   units::format(units::Length::fromSi(beyondFocus))));
+    }
+    case model::Viewing::Fibre: {
+        const double nohd = 1.7 / c.numericalAperture * std::sqrt(quantity * invLimit / std::numbers::pi);
+        return finite(nohd, "multimode fibre: (1.7/NA) sqrt(P/(pi MPE))");
+    }
+    case model::Viewing::Diffuse: {
+        // The limit depends on r through the apparent size of the lit spot, so the radius is found numerically.
+        const double cosTheta = std::cos(c.viewingAngle.si());
+        auto ratio = [&](double r) {
+            const PointGeometry g = geometryAt(c, request.beam, r);
+            double sum = 0.0;
+            std::vector<limits::LineRatio> ratios;
+            for (const LineResult& line : result.lines) {
+                limits::MpeRequest mpe = line.mpe.request;
+                mpe.sourceAngle = units::Angle::fromSi(g.sourceAngle_rad);
+                const auto evaluated = limits::evaluateMpe(mpe);
+                const double limit =
+                    evaluated ? (e.pulsed ? evaluated->perPulse().si() : evaluated->irradiance().si()) : line.limit;
+                ratios.push_back(
+                    limits::LineRatio{line.sample.wavelength, quantity * line.sample.powerFraction * g.powerFactor *
+                                                                  g.pointIrradiancePerWatt / limit});
+            }
+            sum = limits::combineLines(limits::Target::Eye, ratios).governingSum;
+            return sum;
+        };
+        HazardDistance d = solve(ratio, "diffuse reflection, rho P cos(theta) / (pi r^2), with C6 from the lit "
+                                        "spot's apparent size");
+        d.smallSource =
+            units::Length::fromSi(std::sqrt(c.reflectance * quantity * cosTheta * invLimit / std::numbers::pi));
+        return d;
+    }
+    case model::Viewing::Aided: {
+        auto ratio = [&](double r) { return quantity * invLimit * peakPerWatt(c, request.beam, r); };
+        return solve(ratio, "magnifying optics: collection gain tau min(M^2, (min(d, D_o)/7 mm)^2) on the beam, "
+                            "quadrature beam growth");
+    }
+    }
+    return zero("");
+}
+
+void describeConventions(HazardResult& result)
+{
+    const HazardRequest& request = result.request;
+    auto& conv = result.conventions;
+    const model::Beam& beam = request.beam;
+    conv.push_back(fmt::format("beam diameter and divergence as given at {}; used at 1/e (63 %): d63 = {}, "
+                               "divergence {}",
+                               model::toString(beam.definition), units::format(beam.diameter63()),
+                               units::format(beam.divergence63())));
+    if (request.exposureCase.viewing == model::Viewing::Diffuse)
+        conv.push_back("diffuse: irradiance at the eye rho P cos(theta) / (pi r^2), a point value (no aperture "
+                       "averaging)");
+    else if (beam.profile == model::BeamProfile::Gaussian)
+        conv.push_back(fmt::format("declared Gaussian profile: the power through the {} limiting aperture centred "
+                                   "on the beam, 1 - exp(-(D/d63)^2), over the aperture's area",
+                                   units::format(result.aperture)));
+    else
+        conv.push_back(fmt::format("profile not declared Gaussian: P / max(A_beam, A_aperture) with the {} "
+                                   "limiting aperture (never below the exact value)",
+                                   units::format(result.aperture)));
+    conv.push_back("NOHD from the on-axis peak 4P/(pi d^2), without aperture averaging (conservative)");
+    conv.push_back("exposure duration basis: " + result.basis.reason);
+    if (result.lines.size() > 1)
+        conv.push_back("several wavelengths: exposure/MPE ratios add for lines acting on the same tissue "
+                       "(IEC additivity table); each band's OD is uniform over its additive group, which is "
+                       "sufficient for the sum");
+
+    auto& notes = result.notes;
+    const double t = result.basis.duration.seconds();
+    const double shortest = request.emission.spectrum.shortest().nanometres();
+    const double longest = request.emission.spectrum.longest().nanometres();
+    if (t <= 0.25 && (shortest < 400.0 || longest > 700.0))
+        notes.emplace_back("A 0.25 s basis assumes the aversion response, which exists only for visible light "
+                           "(400-700 nm); part of this output lies outside it.");
+    if (t < 2.0 && !result.basis.isDefault)
+        notes.emplace_back("DGUV advice: do not rely on the aversion response; German practice designs for 2 s "
+                           "(trained) to 3 s (untrained).");
+    if (result.nohd.kind == DistanceKind::Zero)
+        notes.emplace_back("The exposure stays below the MPE from the exit on: NOHD = 0.");
+    if (result.nohd.kind == DistanceKind::Unbounded)
+        notes.emplace_back("The hazard does not end within 10 000 km under this model (a beam without divergence "
+                           "never falls below the MPE); enter the measured divergence.");
+    bool reconstructed = false;
+    for (const LineResult& line : result.lines)
+        reconstructed = reconstructed || line.mpe.restsOnReconstructedRow();
+    if (reconstructed)
+        notes.emplace_back("At least one MPE behind this figure rests on a row reconstructed from public material: "
+                           "verify it against the standard's text before relying on it.");
+}
+
+} // namespace beamwarden::hazard
