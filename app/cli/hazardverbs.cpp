@@ -76,7 +76,8 @@ void printResult(const HazardResult& r, Focus focus)
     const LineResult& g = r.lines[r.governingLine];
     fmt::print("  exposure        {} at the worst point\n", exposureText(r.exposureAtPoint, r.pulsed));
     fmt::print("  MPE             {} at {} ({}, {})\n", exposureText(r.limit, r.pulsed),
-               units::format(g.sample.wavelength), limits::toString(r.governingRule),
+               units::format(g.sample.wavelength),
+               r.pulsed ? limits::toString(r.governingRule) : std::string_view("single exposure"),
                g.mpe.setsTie ? std::string("both rule sets")
                              : std::string(limits::ruleSet(g.mpe.governing().set).name));
     fmt::print("  exposure / MPE  {:.4g}{}\n", r.combinedRatio, r.lines.size() > 1 ? " (additive lines summed)" : "");
@@ -89,9 +90,11 @@ void printResult(const HazardResult& r, Focus focus)
     }
     if (r.bands.size() > 1 || r.lines.size() > 1) {
         fmt::print("  OD per band\n");
-        for (const BandOd& band : r.bands)
-            fmt::print("    {:>10} to {:<10} OD {:.1f}\n", units::format(band.from), units::format(band.to),
-                       roundOdUp(band.requiredOd));
+        for (const BandOd& band : r.bands) {
+            const std::string where = band.from == band.to ? units::format(band.from)
+                                                            : units::format(band.from) + " to " + units::format(band.to);
+            fmt::print("    {:<26} OD {:.1f}\n", where, roundOdUp(band.requiredOd));
+        }
     }
     const bool diffuse = r.request.exposureCase.viewing == model::Viewing::Diffuse;
     fmt::print("  {}  {}\n", diffuse ? "hazard radius " : "NOHD          ", distanceText(r.nohd));

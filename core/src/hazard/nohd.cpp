@@ -2,6 +2,7 @@
 
 #include "beamwarden/hazard/geometry.hpp"
 #include "beamwarden/limits/additivity.hpp"
+#include "beamwarden/limits/report.hpp"
 
 #include <cmath>
 #include <fmt/core.h>
@@ -180,6 +181,11 @@ void describeConventions(HazardResult& result)
     if (reconstructed)
         notes.emplace_back("At least one MPE behind this figure rests on a row reconstructed from public material: "
                            "verify it against the standard's text before relying on it.");
+    // The limit engine's own notes for the governing line (below the table, supercontinuum, C5 readings).
+    for (std::string& note : limits::resultNotes(result.lines[result.governingLine].mpe)) {
+        if (!note.starts_with("This figure rests on a row reconstructed"))
+            notes.push_back(std::move(note));
+    }
 }
 
 } // namespace beamwarden::hazard

@@ -2,6 +2,7 @@
 // p. 23); its cells are reconstructed.
 #include "beamwarden/limits/additivity.hpp"
 
+#include <algorithm>
 #include <array>
 
 namespace beamwarden::limits {
@@ -48,8 +49,12 @@ AdditivityResult combineLines(Target target, const std::vector<LineRatio>& lines
             if (additive(target, ri, spectralRegion(other.wavelength)))
                 result.combinedRatio[i] += other.exposureOverMpe;
         }
-        if (result.combinedRatio[i] > result.governingSum) {
-            result.governingSum = result.combinedRatio[i];
+        // Among equal sums (lines of one additive group) the line with the largest own ratio is named.
+        const bool larger = result.combinedRatio[i] > result.governingSum * (1.0 + 1e-12);
+        const bool tieButStronger = result.combinedRatio[i] >= result.governingSum * (1.0 - 1e-12) &&
+                                    lines[i].exposureOverMpe > lines[result.governingLine].exposureOverMpe;
+        if (larger || tieButStronger) {
+            result.governingSum = std::max(result.governingSum, result.combinedRatio[i]);
             result.governingLine = i;
         }
     }
