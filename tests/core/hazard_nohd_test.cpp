@@ -1,9 +1,9 @@
 // Hazard distances (check-values.md section 3: P10, C25-C33; hazard-and-eyewear.md section 5). The MPE is computed by
 // the engine, so each case picks the wavelength and exposure basis whose MPE the check value assumes:
-//   25.46 W/m2 = 632.8 nm at 0.25 s, 18 t^0.75 J/m2 / t (check-values.md C1, P2; both rule sets);
+//   25.46 W/m2 = visible (632.8 nm) at 0.25 s (check-values.md C25, P10: "1 W visible ... t = 0.25 s");
 //   50 W/m2    = 1064 nm, small source, at exactly 10 s: the lower adjoining row 10 C4 C7 W/m2 with C4 = 5, C7 = 1
 //                (check-values.md section 0 conventions; exposure-limits.md section 0.2 breakpoint rule);
-//   50.61 W/m2 = 1064 nm just below 10 s, on the 90 t^0.75 side of the breakpoint (check-values.md C27, K8).
+//   50.61 W/m2 = 1064 nm just below 10 s, on the 90 t^0.75 side of the breakpoint (check-values.md C27).
 // A beam diameter of zero is refused by model::validate, so the a = 0 cases use a = 1 um: it shortens a 223.6 m NOHD
 // by 1 mm (computed: (sqrt(4P/(pi MPE)) - a)/phi), far inside the 1e-3 tolerance.
 #include <catch2/catch.hpp>
@@ -55,7 +55,7 @@ HazardRequest cwBeam(units::Wavelength wavelength, double watts, double a_m, dou
     return request;
 }
 
-// The visible 0.25 s case whose MPE is 25.46 W/m2 (check-values.md C1, P2).
+// The visible 0.25 s case whose MPE is 25.46 W/m2 (check-values.md C25, P10).
 HazardRequest visible(double watts, double a_m, double phi_rad)
 {
     return cwBeam(632.8_nm, watts, a_m, phi_rad, 0.25_s);
@@ -80,7 +80,7 @@ HazardResult evaluated(const HazardRequest& request)
 TEST_CASE("hazard P10/C25: 1 W visible, a = 0, 1 mrad, 0.25 s", "[hazard][nohd]")
 {
     const HazardResult r = evaluated(visible(1.0, kTinyDiameter_m, 1e-3));
-    // the MPE the case assumes: check-values.md C1 / P2, 25.46 W/m2 (computed from verified formulas; 1e-3)
+    // the MPE the case assumes: check-values.md C25 / P10, 25.46 W/m2 (computed from verified formulas; 1e-3)
     CHECK(r.limit == Approx(25.46).epsilon(1e-3));
     REQUIRE(r.nohd.kind == DistanceKind::Finite);
     // check-values.md C25: NOHD 223.6 m, both models (computed from verified formulas; tolerance 1e-3)
@@ -130,10 +130,10 @@ TEST_CASE("hazard C27: 1064 nm, 10 W, a = 3 mm, 2 mrad, 10 s", "[hazard][nohd]")
     }
     SECTION("on the t^0.75 side of the breakpoint, MPE 50.61 W/m2")
     {
-        // 9.999 s instead of 10 s: 90 t^-0.25 = 50.61 W/m2 (check-values.md K8: 506.1 J/m2 at 10 s); the 1e-4 s
-        // shift changes the MPE by 2.5e-5 relative (computed)
+        // 9.999 s instead of 10 s: the 90 t^0.75 J/m2 side of the breakpoint, 90 x 10^-0.25 = 50.61 W/m2 (the value
+        // check-values.md C27 quotes); the 1e-4 s shift changes it by 2.5e-6 relative (computed)
         const HazardResult r = evaluated(cwBeam(1064_nm, 10.0, 3e-3, 2e-3, 9.999_s));
-        // check-values.md C27 / K8: 50.61 W/m2 (computed; tolerance 1e-3)
+        // check-values.md C27: 50.61 W/m2 (computed; tolerance 1e-3)
         CHECK(r.limit == Approx(50.61).epsilon(1e-3));
         // check-values.md C27: with 50.61 W/m2, linear 249.3 m, quadrature 250.8 m (computed; tolerance 1e-3)
         CHECK(r.nohd.linear.metres() == Approx(249.3).epsilon(1e-3));
@@ -196,7 +196,7 @@ TEST_CASE("hazard diffuse NHZ against a hand calculation", "[hazard][nohd][diffu
     request.exposureCase.distance = 1_m;
     const HazardResult r = evaluated(request);
     REQUIRE(r.nohd.kind == DistanceKind::Finite);
-    CHECK(r.nohd.value.metres() == Approx(0.12615).epsilon(1e-3)); // computed above; tolerance 1e-3
+    CHECK(r.nohd.value.metres() == Approx(0.12615).epsilon(1e-3));       // computed above; tolerance 1e-3
     CHECK(r.nohd.smallSource.metres() == Approx(0.12615).epsilon(1e-3)); // computed above; tolerance 1e-3
 }
 
@@ -222,6 +222,26 @@ TEST_CASE("hazard diffuse near a wide spot: C6 shortens the radius, never length
     // hazard.hpp: smallSource is the radius with the spot treated as a small source (no C6): check-values.md C29,
     // 0.2523 m (computed from verified formulas; tolerance 1e-3)
     CHECK(r.nohd.smallSource.metres() == Approx(0.2523).epsilon(1e-3));
+}
+
+TEST_CASE("hazard diffuse radius does not depend on the closest approach", "[hazard][nohd][diffuse]")
+{
+    // hazard-and-eyewear.md section 5.9: the hazard zone is where the exposure exceeds the MPE, a property of the
+    // output and the spot; the closest approach (hazard.hpp: the worst point evaluated) only picks where the OD is
+    // formed. So the radius for the wide-spot case above must be the same whether the person's closest approach is
+    // 0.1 m or 1 m (definition; tolerance 1e-3). With the tiny spot of C29 the same holds trivially.
+    for (const double spot : {kTinyDiameter_m, 50e-3}) {
+        INFO("spot " << spot << " m");
+        HazardRequest near = nearInfrared(10.0, spot, 0.0);
+        near.exposureCase.viewing = Viewing::Diffuse;
+        near.exposureCase.distance = units::Length::fromSi(0.1);
+        HazardRequest far = near;
+        far.exposureCase.distance = units::Length::fromSi(1.0);
+        const HazardResult a = evaluated(near);
+        const HazardResult b = evaluated(far);
+        CHECK(a.nohd.kind == b.nohd.kind);
+        CHECK(a.nohd.value.metres() == Approx(b.nohd.value.metres()).epsilon(1e-3));
+    }
 }
 
 TEST_CASE("hazard C31: aided viewing with 7x50 binoculars", "[hazard][nohd][aided]")

@@ -83,7 +83,8 @@ PointGeometry geometryAt(const model::ExposureCase& c, const model::Beam& beam, 
         // The lit spot seen from r: an extended source when it subtends more than alpha_min (section 5.5); the
         // spot is taken at the exit diameter, the smallest it can be, so alpha (and any C6 relaxation) is not
         // over-stated.
-        g.sourceAngle_rad = a * cosTheta / r;
+        // The full angle subtended, 2 atan(d cos(theta) / 2r): equal to d cos(theta)/r far away, never above pi near.
+        g.sourceAngle_rad = 2.0 * std::atan(a * cosTheta / (2.0 * r));
         break;
     }
     case model::Viewing::Aided:

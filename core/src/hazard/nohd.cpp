@@ -8,6 +8,7 @@
 #include <fmt/core.h>
 #include <functional>
 #include <numbers>
+#include <optional>
 
 namespace beamwarden::hazard {
 
@@ -101,27 +102,41 @@ HazardDistance hazardDistance(const HazardRequest& request, const HazardResult& 
     case model::Viewing::Diffuse: {
         // The limit depends on r through the apparent size of the lit spot, so the radius is found numerically.
         const double cosTheta = std::cos(c.viewingAngle.si());
+        auto evaluateAt = [&](const LineResult& line, double alpha) -> std::optional<double> {
+            limits::MpeRequest mpe = line.mpe.request;
+            mpe.sourceAngle = units::Angle::fromSi(alpha);
+            const auto evaluated = limits::evaluateMpe(mpe);
+            if (!evaluated)
+                return std::nullopt;
+            return e.pulsed ? evaluated->perPulse().si() : evaluated->irradiance().si();
+        };
+        std::vector<double> smallLimits;
+        for (const LineResult& line : result.lines)
+            smallLimits.push_back(evaluateAt(line, 0.0).value_or(line.limit));
+        // Should the engine refuse an angle, the small-source limit (the lowest) stands in: never a laxer one.
+        auto limitAt = [&](const LineResult& line, double alpha) {
+            const auto index = static_cast<std::size_t>(&line - result.lines.data());
+            return evaluateAt(line, alpha).value_or(smallLimits[index]);
+        };
         auto ratio = [&](double r) {
             const PointGeometry g = geometryAt(c, request.beam, r);
-            double sum = 0.0;
             std::vector<limits::LineRatio> ratios;
-            for (const LineResult& line : result.lines) {
-                limits::MpeRequest mpe = line.mpe.request;
-                mpe.sourceAngle = units::Angle::fromSi(g.sourceAngle_rad);
-                const auto evaluated = limits::evaluateMpe(mpe);
-                const double limit =
-                    evaluated ? (e.pulsed ? evaluated->perPulse().si() : evaluated->irradiance().si()) : line.limit;
-                ratios.push_back(
-                    limits::LineRatio{line.sample.wavelength, quantity * line.sample.powerFraction * g.powerFactor *
-                                                                  g.pointIrradiancePerWatt / limit});
-            }
-            sum = limits::combineLines(limits::Target::Eye, ratios).governingSum;
-            return sum;
+            for (const LineResult& line : result.lines)
+                ratios.push_back(limits::LineRatio{line.sample.wavelength,
+                                                   quantity * line.sample.powerFraction * g.powerFactor *
+                                                       g.pointIrradiancePerWatt / limitAt(line, g.sourceAngle_rad)});
+            return limits::combineLines(limits::Target::Eye, ratios).governingSum;
         };
         HazardDistance d = solve(ratio, "diffuse reflection, rho P cos(theta) / (pi r^2), with C6 from the lit "
                                         "spot's apparent size");
+        // Beside it, the radius with the spot as a small source: each line's MPE at alpha = 0.
+        std::vector<limits::LineRatio> smallShares;
+        for (const LineResult& line : result.lines)
+            smallShares.push_back(
+                limits::LineRatio{line.sample.wavelength, line.sample.powerFraction / limitAt(line, 0.0)});
+        const double invSmall = limits::combineLines(limits::Target::Eye, smallShares).governingSum;
         d.smallSource =
-            units::Length::fromSi(std::sqrt(c.reflectance * quantity * cosTheta * invLimit / std::numbers::pi));
+            units::Length::fromSi(std::sqrt(c.reflectance * quantity * cosTheta * invSmall / std::numbers::pi));
         return d;
     }
     case model::Viewing::Aided: {
