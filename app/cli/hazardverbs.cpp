@@ -75,11 +75,10 @@ void printResult(const HazardResult& r, Focus focus)
     printSource(r);
     const LineResult& g = r.lines[r.governingLine];
     fmt::print("  exposure        {} at the worst point\n", exposureText(r.exposureAtPoint, r.pulsed));
-    fmt::print("  MPE             {} at {} ({}, {})\n", exposureText(r.limit, r.pulsed),
-               units::format(g.sample.wavelength),
-               r.pulsed ? limits::toString(r.governingRule) : std::string_view("single exposure"),
-               g.mpe.setsTie ? std::string("both rule sets")
-                             : std::string(limits::ruleSet(g.mpe.governing().set).name));
+    fmt::print(
+        "  MPE             {} at {} ({}, {})\n", exposureText(r.limit, r.pulsed), units::format(g.sample.wavelength),
+        r.pulsed ? limits::toString(r.governingRule) : std::string_view("single exposure"),
+        g.mpe.setsTie ? std::string("both rule sets") : std::string(limits::ruleSet(g.mpe.governing().set).name));
     fmt::print("  exposure / MPE  {:.4g}{}\n", r.combinedRatio, r.lines.size() > 1 ? " (additive lines summed)" : "");
     fmt::print("  required OD     {} (exact {:.3f}; rounded up, never down)\n", fmt::format("{:.1f}", r.displayedOd),
                r.requiredOd);
@@ -92,7 +91,7 @@ void printResult(const HazardResult& r, Focus focus)
         fmt::print("  OD per band\n");
         for (const BandOd& band : r.bands) {
             const std::string where = band.from == band.to ? units::format(band.from)
-                                                            : units::format(band.from) + " to " + units::format(band.to);
+                                                           : units::format(band.from) + " to " + units::format(band.to);
             fmt::print("    {:<26} OD {:.1f}\n", where, roundOdUp(band.requiredOd));
         }
     }

@@ -1,6 +1,7 @@
 #include "verbs.hpp"
 
 #include "beamwarden/caution.hpp"
+#include "eyewearverbs.hpp"
 #include "hazardverbs.hpp"
 #include "mpeverb.hpp"
 
@@ -36,6 +37,7 @@ const std::vector<Verb>& verbs()
         {"mpe", "maximum permissible exposure: one wavelength, single exposure or pulse train", runMpe},
         {"nohd", "nominal ocular hazard distance for one output and exposure case", runNohd},
         {"od", "optical density eyewear must reach for one output and exposure case", runOd},
+        {"eyewear", "EN 207 levels a source requires (level) and protection checks of an item (check)", runEyewear},
         {"help", "show this overview",
          [](const std::vector<std::string>&) {
              printHelp();
