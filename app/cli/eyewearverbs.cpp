@@ -3,7 +3,7 @@
 #include "beamwarden/caution.hpp"
 #include "beamwarden/eyewear/protection.hpp"
 #include "hazardrequest.hpp"
-#include "odtable.hpp"
+#include "beamwarden/eyewear/odtable.hpp"
 #include "verbs.hpp"
 
 #include <fmt/core.h>

@@ -157,8 +157,15 @@ Result<std::vector<LevelRequirement>> requiredLevels(const hazard::HazardRequest
         return std::unexpected(exposureCase.error());
     const model::Emission& e = *emission;
 
-    // EN 207 densities use the 1/e diameter at the eyewear and no aperture averaging: E = P/A63, H = Q/A63.
-    const hazard::PointGeometry point = hazard::geometryAt(*exposureCase, *beam, exposureCase->distance.si());
+    // EN 207 densities use the 1/e diameter at the eyewear and no aperture averaging: E = P/A63, H = Q/A63. A filter
+    // is not worn at a fibre end or in a focus: there the eyewear is taken at least 100 mm away (the distance from
+    // which IEC 60825-1 assesses the eye at 302.5-4000 nm, BGV B2 notes, exposure-limits.md section 2.4).
+    double position = exposureCase->distance.si();
+    if (exposureCase->viewing == model::Viewing::Fibre)
+        position = std::max(position, 0.1);
+    if (exposureCase->viewing == model::Viewing::Lens)
+        position = std::max(position, exposureCase->focalLength.si() + 0.1);
+    const hazard::PointGeometry point = hazard::geometryAt(*exposureCase, *beam, position);
     const double d63 = std::max(point.d63_m, 1e-9);
     const double perWatt = point.pointSource ? point.powerFactor * point.pointIrradiancePerWatt
                                              : point.powerFactor / (std::numbers::pi * d63 * d63 / 4.0);

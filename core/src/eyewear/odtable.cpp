@@ -1,4 +1,4 @@
-#include "odtable.hpp"
+#include "beamwarden/eyewear/odtable.hpp"
 
 #include <charconv>
 #include <cmath>
@@ -6,7 +6,7 @@
 #include <fstream>
 #include <sstream>
 
-namespace beamwarden::cli {
+namespace beamwarden::eyewear {
 
 namespace {
 
@@ -81,14 +81,23 @@ Result<std::vector<model::OdRow>> parseOdTable(std::string_view text, const std:
     return rows;
 }
 
+std::string formatOdTable(const std::vector<model::OdRow>& rows)
+{
+    std::string out;
+    for (const model::OdRow& row : rows)
+        out += fmt::format("{:g}-{:g} {}{:g}\n", row.from.nanometres(), row.to.nanometres(), row.atLeast ? ">=" : "",
+                           row.od);
+    return out;
+}
+
 Result<std::vector<model::OdRow>> readOdTable(const std::string& path)
 {
     std::ifstream file(path, std::ios::binary);
     if (!file)
-        return fail("--od-table", path, "a readable text file");
+        return fail("od-table", path, "a readable text file");
     std::stringstream text;
     text << file.rdbuf();
     return parseOdTable(text.str(), path);
 }
 
-} // namespace beamwarden::cli
+} // namespace beamwarden::eyewear
