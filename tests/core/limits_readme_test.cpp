@@ -9,7 +9,7 @@
 
 TEST_CASE("The limits README lists every row of every rule set", "[limits][docs]")
 {
-    std::ifstream file(std::string(BEAMWARDEN_TEST_DATA_DIR) + "/../../core/src/limits/README.md");
+    std::ifstream file(std::string(BEAMWARDEN_SOURCE_DIR) + "/core/src/limits/README.md");
     REQUIRE(file.good());
     std::stringstream text;
     text << file.rdbuf();
