@@ -1,9 +1,13 @@
 #include "verbs.hpp"
 
+#include "backupverb.hpp"
 #include "beamwarden/caution.hpp"
+#include "assessverb.hpp"
 #include "eyewearverbs.hpp"
 #include "hazardverbs.hpp"
+#include "labverbs.hpp"
 #include "mpeverb.hpp"
+#include "sheetverb.hpp"
 
 #include <fmt/core.h>
 
@@ -37,7 +41,11 @@ const std::vector<Verb>& verbs()
         {"mpe", "maximum permissible exposure: one wavelength, single exposure or pulse train", runMpe},
         {"nohd", "nominal ocular hazard distance for one output and exposure case", runNohd},
         {"od", "optical density eyewear must reach for one output and exposure case", runOd},
+        {"assess", "assess a lab's lasers: every output and case, eye and skin, the shelf checked", runAssess},
         {"eyewear", "EN 207 levels a source requires (level) and protection checks of an item (check)", runEyewear},
+        {"sheet", "a laser's hazard sheet from a lab file, as PDF (no display needed)", runSheet},
+        {"lab", "lab files: new [--demo], export, import, check, import-eyewear", runLab},
+        {"backup", "copy a lab file safely, even while it is open", runBackup},
         {"help", "show this overview",
          [](const std::vector<std::string>&) {
              printHelp();

@@ -1,7 +1,9 @@
 #include "startup.hpp"
 
 #include "beamwarden/caution.hpp"
+#include "document/labdocument.hpp"
 #include "mainwindow.hpp"
+#include "settings/settings.hpp"
 
 #include <QApplication>
 #include <QCommandLineParser>
@@ -17,9 +19,6 @@
 namespace beamwarden::gui {
 
 namespace {
-
-// The demo lab's name; its records arrive with the lab file (the window shows the name until then).
-const char* const kDemoLabName = "Larkspur Ridge Photonics Laboratory";
 
 bool saveScreenshot(QWidget& window, const QString& path)
 {
@@ -50,7 +49,17 @@ StartupParse parseStartupOptions(const QStringList& arguments)
     const QCommandLineOption language(QStringLiteral("language"),
                                       QApplication::translate("Startup", "User-interface language, e.g. en or de."),
                                       QStringLiteral("CODE"));
-    parser.addOptions({demo, screenshot, language});
+    const QCommandLineOption lab(QStringLiteral("lab"), QApplication::translate("Startup", "Lab file to open."),
+                                 QStringLiteral("FILE"));
+    const QCommandLineOption panel(
+        QStringLiteral("panel"),
+        QApplication::translate("Startup", "Panel to show: Lasers, Eyewear, Assessment, Limit curves, Hazard sheet, "
+                                           "History."),
+        QStringLiteral("NAME"));
+    const QCommandLineOption laser(QStringLiteral("laser"),
+                                   QApplication::translate("Startup", "Laser to select, by name."),
+                                   QStringLiteral("NAME"));
+    parser.addOptions({demo, screenshot, language, lab, panel, laser});
     parser.addPositionalArgument(QStringLiteral("lab"), QApplication::translate("Startup", "Lab file to open."),
                                  QStringLiteral("[LAB.bwlab]"));
 
@@ -79,14 +88,44 @@ StartupParse parseStartupOptions(const QStringList& arguments)
     options.openDemo = parser.isSet(demo);
     options.screenshotPath = parser.value(screenshot);
     options.language = parser.value(language);
-    if (!positional.isEmpty())
+    options.panel = parser.value(panel);
+    options.laser = parser.value(laser);
+    options.labFile = parser.value(lab);
+    if (!positional.isEmpty()) {
+        if (!options.labFile.isEmpty()) {
+            std::fprintf(stderr, "beamwarden: give the lab file once (--lab or as an argument)\n");
+            result.exitCode = 2;
+            return result;
+        }
         options.labFile = positional.first();
+    }
+    if (!options.panel.isEmpty() && !panelFromName(options.panel)) {
+        std::fprintf(stderr,
+                     "beamwarden: --panel: '%s' is not a panel; expected one of Lasers, Eyewear, Assessment, "
+                     "\"Limit curves\", \"Hazard sheet\", History\n",
+                     qPrintable(options.panel));
+        result.exitCode = 2;
+        return result;
+    }
     result.options = options;
     return result;
 }
 
-void installTranslations(QApplication& app, const QString& language)
+std::optional<Panel> panelFromName(const QString& name)
 {
+    const QString wanted = name.simplified().toLower().remove(QLatin1Char(' ')).remove(QLatin1Char('-'));
+    const char* const english[] = {"lasers", "eyewear", "assessment", "limitcurves", "hazardsheet", "history"};
+    for (int i = 0; i < kPanelCount; ++i) {
+        const QString title = panelTitle(static_cast<Panel>(i)).toLower().remove(QLatin1Char(' '));
+        if (wanted == QString::fromLatin1(english[i]) || wanted == title)
+            return static_cast<Panel>(i);
+    }
+    return std::nullopt;
+}
+
+void installTranslations(QApplication& app, const QString& requested)
+{
+    const QString language = requested.isEmpty() ? Settings::language() : requested;
     const QLocale locale = language.isEmpty() ? QLocale::system() : QLocale(language);
     auto* ours = new QTranslator(&app);
     if (ours->load(locale, QStringLiteral("beamwarden"), QStringLiteral("_"), QStringLiteral(":/i18n")))
@@ -100,10 +139,28 @@ void installTranslations(QApplication& app, const QString& language)
 int runApplication(QApplication& app, const StartupOptions& options)
 {
     MainWindow window;
-    if (options.openDemo)
-        window.setLab(QString::fromUtf8(kDemoLabName), MainWindow::tr("demo lab"));
-    else if (!options.labFile.isEmpty())
-        window.setLab(QFileInfo(options.labFile).completeBaseName(), options.labFile);
+    if (options.openDemo) {
+        if (auto opened = window.openDemoLab(); !opened) {
+            std::fprintf(stderr, "beamwarden: the demo lab could not be opened: %s\n",
+                         opened.error().message().c_str());
+            return 1;
+        }
+    } else if (!options.labFile.isEmpty()) {
+        if (auto opened = window.openLab(options.labFile); !opened) {
+            std::fprintf(stderr, "beamwarden: %s\n", opened.error().message().c_str());
+            if (!options.screenshotPath.isEmpty())
+                return 2;
+        }
+    }
+    if (!options.laser.isEmpty() && window.document()) {
+        const auto& lasers = window.document()->lasers();
+        for (std::size_t i = 0; i < lasers.size(); ++i) {
+            if (QString::fromStdString(lasers[i].name) == options.laser)
+                window.selectLaser(static_cast<int>(i));
+        }
+    }
+    if (const auto panel = panelFromName(options.panel))
+        window.showPanel(*panel);
     window.show();
 
     if (!options.screenshotPath.isEmpty()) {

@@ -1,5 +1,7 @@
 #pragma once
 // What the command line asks of the GUI at start-up: a lab file or the demo lab, and optionally a screenshot.
+#include "panels/panel.hpp"
+
 #include <QString>
 #include <QStringList>
 
@@ -13,7 +15,9 @@ struct StartupOptions {
     QString labFile;        // empty: no lab file named
     bool openDemo = false;  // --demo: open the bundled demo lab
     QString screenshotPath; // --screenshot FILE.png: render the window after start-up, save, exit
-    QString language;       // --language de: force a UI language (otherwise the system locale)
+    QString language;       // --language de: force a UI language (otherwise the settings, then the system locale)
+    QString panel;          // --panel NAME: the panel to show first (names as in the navigation rail)
+    QString laser;          // --laser NAME: the laser to select first
 };
 
 // Parses the arguments; on --help/--version or a bad argument it prints and returns the exit code instead.
@@ -22,6 +26,9 @@ struct StartupParse {
     int exitCode = 0;
 };
 [[nodiscard]] StartupParse parseStartupOptions(const QStringList& arguments);
+
+// The panel for a name as the rail shows it (English or the current language), case and spaces ignored.
+[[nodiscard]] std::optional<Panel> panelFromName(const QString& name);
 
 // Installs the translation for the UI language (system locale unless overridden).
 void installTranslations(QApplication& app, const QString& language);

@@ -30,6 +30,7 @@ void checkDensity(const ParsedEyewear& eyewear, const OutputRequirement& req, Ou
     if (!eyewear.hasOdData()) {
         worsen(out.verdict, Verdict::CannotTell);
         out.reasons.emplace_back("no spectral OD table and no EN 207/EN 208 marking: the optical density is not known");
+        out.marginOd = std::numeric_limits<double>::quiet_NaN(); // unknown, not zero
         return;
     }
     std::vector<limits::LineRatio> residual;

@@ -33,6 +33,17 @@ units::Wavelength Spectrum::longest() const
     return best;
 }
 
+units::Wavelength Spectrum::centroid() const
+{
+    double sum = 0.0;
+    double weight = 0.0;
+    for (const SpectralSample& s : samples) {
+        sum += s.wavelength.si() * s.powerFraction;
+        weight += s.powerFraction;
+    }
+    return weight > 0.0 ? units::Wavelength::fromSi(sum / weight) : units::Wavelength{};
+}
+
 Spectrum singleLine(units::Wavelength wavelength)
 {
     return Spectrum{{SpectralSample{wavelength, 1.0, units::Wavelength{}}}};

@@ -20,6 +20,8 @@ struct Spectrum {
     [[nodiscard]] bool isSingleLine() const { return samples.size() == 1; }
     [[nodiscard]] units::Wavelength shortest() const;
     [[nodiscard]] units::Wavelength longest() const;
+    // The power-weighted mean wavelength: the line itself, or the centre of a band.
+    [[nodiscard]] units::Wavelength centroid() const;
 };
 
 // One line carrying all the power.
