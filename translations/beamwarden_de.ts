@@ -340,7 +340,7 @@
     </message>
     <message>
         <source>hazard radius</source>
-        <translation>Gefährdungsradius</translation>
+        <translation>Gefährdungs­radius</translation>
     </message>
     <message>
         <source>does not end within the model</source>
@@ -512,7 +512,7 @@
     </message>
     <message>
         <source>Required OD</source>
-        <translation>Erforderliche OD</translation>
+        <translation>Erforder­liche OD</translation>
     </message>
     <message>
         <source>Outputs and exposure cases (continued)</source>
@@ -617,6 +617,14 @@
     <message>
         <source>User, briefed on this sheet</source>
         <translation>Nutzer(in), anhand dieses Blatts unterwiesen</translation>
+    </message>
+    <message>
+        <source>Withdrawn: this assessment no longer stands. The figures on this sheet are computed from the current inputs.</source>
+        <translation>Zurückgezogen: Diese Bewertung gilt nicht mehr. Die Werte auf diesem Blatt sind aus den aktuellen Eingaben berechnet.</translation>
+    </message>
+    <message>
+        <source>Signatures</source>
+        <translation>Unterschriften</translation>
     </message>
 </context>
 <context>

@@ -35,9 +35,10 @@ const std::vector<FlagSpec>& sheetFlags()
 
 void printHelp()
 {
-    fmt::print("Usage: beamwarden-cli sheet LAB.bwlab --laser NAME --out FILE.pdf [FLAGS]\n\nWrites the hazard sheet of "
-               "one laser (its outputs, limits, distances, required OD, eyewear, assessment record and space for "
-               "signatures) as a PDF. No display is needed.\n\n");
+    fmt::print(
+        "Usage: beamwarden-cli sheet LAB.bwlab --laser NAME --out FILE.pdf [FLAGS]\n\nWrites the hazard sheet of "
+        "one laser (its outputs, limits, distances, required OD, eyewear, assessment record and space for "
+        "signatures) as a PDF. No display is needed.\n\n");
     for (const FlagSpec& flag : sheetFlags())
         fmt::print("  --{:<10} {:<9} {}\n", flag.name, flag.meta, flag.help);
     fmt::print("\nExit codes: 0 written, 1 the file could not be written or the lab file read, 2 input refused.\n");
@@ -56,12 +57,22 @@ int storeError(const InputError& error)
     return error.field == store::kStorageField ? kExitFailed : kExitBadInput;
 }
 
+// Qt's own chatter about a headless session (no XDG runtime folder, and the like) is not the user's business; its
+// warnings about real trouble still reach stderr.
+void qtMessage(QtMsgType type, const QMessageLogContext&, const QString& message)
+{
+    if (type == QtDebugMsg || type == QtInfoMsg || message.startsWith(QStringLiteral("QStandardPaths:")))
+        return;
+    fmt::print(stderr, "beamwarden-cli sheet: {}\n", message.toStdString());
+}
+
 // The CLI's only Qt application: fonts and painting need one. Without a platform chosen, the offscreen one is used so
 // that no display is needed.
 QGuiApplication& guiApplication()
 {
     if (qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM"))
         qputenv("QT_QPA_PLATFORM", "offscreen");
+    qInstallMessageHandler(qtMessage);
     static int argc = 1;
     static char name[] = "beamwarden-cli";
     static char* argv[] = {name, nullptr};
@@ -122,8 +133,8 @@ int runSheet(const std::vector<std::string>& argv)
     auto lasers = labStore->lasers();
     if (!lasers)
         return storeError(lasers.error());
-    const auto laser = std::find_if(lasers->begin(), lasers->end(),
-                                    [&](const model::Laser& l) { return l.name == *laserName; });
+    const auto laser =
+        std::find_if(lasers->begin(), lasers->end(), [&](const model::Laser& l) { return l.name == *laserName; });
     if (laser == lasers->end()) {
         std::string names;
         for (const model::Laser& l : *lasers)

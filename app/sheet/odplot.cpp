@@ -61,9 +61,9 @@ std::vector<LegendEntry> legendEntries(const PlotData& plot)
 {
     std::vector<LegendEntry> legend{{Sheet::tr("required OD, per band (diamond)"), true, -1}};
     for (std::size_t i = 0; i < plot.eyewear.size(); ++i)
-        legend.push_back({(i == 0 ? Sheet::tr("%1 (solid line)") : Sheet::tr("%1 (dashed line)"))
-                              .arg(plot.eyewear[i].label),
-                          false, static_cast<int>(i)});
+        legend.push_back(
+            {(i == 0 ? Sheet::tr("%1 (solid line)") : Sheet::tr("%1 (dashed line)")).arg(plot.eyewear[i].label), false,
+             static_cast<int>(i)});
     if (plot.eyewear.empty())
         legend.push_back({Sheet::tr("no eyewear to compare"), false, -1});
     if (!plot.eyewearNote.isEmpty())
@@ -115,7 +115,9 @@ void paintOdPlot(QPainter& painter, const PlotData& plot, const SheetFormat& for
     maxOd = std::min(std::ceil(maxOd + 0.5), 20.0);
     const double logFrom = std::log10(plot.from_nm);
     const double logTo = std::log10(plot.to_nm);
-    auto xAt = [&](double nm) { return axisLeft + (std::log10(nm) - logFrom) / (logTo - logFrom) * (axisRight - axisLeft); };
+    auto xAt = [&](double nm) {
+        return axisLeft + (std::log10(nm) - logFrom) / (logTo - logFrom) * (axisRight - axisLeft);
+    };
     auto yAt = [&](double od) { return axisBottom - std::clamp(od, 0.0, maxOd) / maxOd * (axisBottom - axisTop); };
 
     painter.save();
@@ -139,11 +141,11 @@ void paintOdPlot(QPainter& painter, const PlotData& plot, const SheetFormat& for
         painter.drawLine(QPointF(x, axisTop), QPointF(x, axisBottom));
         const double value = micrometres ? tick / 1000.0 : tick;
         const QString text = format.number(value, value < 10.0 && std::abs(value - std::round(value)) > 1e-9 ? 1 : 0);
-        drawText(painter, Text{text, tickFont, palette::kInk, Qt::AlignHCenter}, QPointF(x - pt(20), axisBottom + pt(2)),
-                 pt(40));
+        drawText(painter, Text{text, tickFont, palette::kInk, Qt::AlignHCenter},
+                 QPointF(x - pt(20), axisBottom + pt(2)), pt(40));
     }
-    const QString axisTitle = micrometres ? Sheet::tr("wavelength (\u00b5m, log scale)")
-                                          : Sheet::tr("wavelength (nm, log scale)");
+    const QString axisTitle =
+        micrometres ? Sheet::tr("wavelength (\u00b5m, log scale)") : Sheet::tr("wavelength (nm, log scale)");
     drawText(painter, Text{axisTitle, labelFont, palette::kInk, Qt::AlignHCenter},
              QPointF(axisLeft, axisBottom + pt(2) + xLabelHeight + pt(1)), axisRight - axisLeft);
 

@@ -24,14 +24,14 @@ enum class PageSize : std::uint8_t { A4, Letter };
 
 struct SheetContent {
     model::Lab lab;
-    assessment::LaserAssessment assessment;  // the laser itself is assessment.laser
-    std::vector<model::EyewearItem> shelf;   // the items assessment.eyewear was checked from, same order (for the plot)
-    std::vector<model::Assessment> records;  // the laser's stored assessments, oldest first; may be empty
-    QString programVersion;                  // beamwarden::programVersion()
-    QStringList ruleSetNames;                // limits::fullName of every set behind the figures
-    QString caution;                         // beamwarden::caution(), translated
+    assessment::LaserAssessment assessment; // the laser itself is assessment.laser
+    std::vector<model::EyewearItem> shelf;  // the items assessment.eyewear was checked from, same order (for the plot)
+    std::vector<model::Assessment> records; // the laser's stored assessments, oldest first; may be empty
+    QString programVersion;                 // beamwarden::programVersion()
+    QStringList ruleSetNames;               // limits::fullName of every set behind the figures
+    QString caution;                        // beamwarden::caution(), translated
     PageSize pageSize = PageSize::A4;
-    QString language;                        // "en", "de", ...: numbers are written the way this language does
+    QString language; // "en", "de", ...: numbers are written the way this language does
 };
 
 // Fills the program version, the rule-set names for the assessment's options and the caution (translated through

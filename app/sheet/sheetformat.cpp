@@ -22,6 +22,8 @@ SheetFormat::SheetFormat(const QString& language)
 QString SheetFormat::number(const std::string& printed) const
 {
     QString text = fromUtf8(printed);
+    // A number never parts from its unit at a line end.
+    text.replace(QLatin1Char(' '), QChar(QChar::Nbsp));
     const QString point = m_locale.decimalPoint();
     if (point != QStringLiteral("."))
         text.replace(QLatin1Char('.'), point);
@@ -44,7 +46,8 @@ QString SheetFormat::exposureVerdict(double ratio) const
     static const QRegularExpression exponent(QStringLiteral("e\\+?(-?)0*(\\d+)$"));
     const QRegularExpressionMatch match = exponent.match(factor);
     if (match.hasMatch()) {
-        static const QString superscripts = QStringLiteral("\u2070\u00b9\u00b2\u00b3\u2074\u2075\u2076\u2077\u2078\u2079");
+        static const QString superscripts =
+            QStringLiteral("\u2070\u00b9\u00b2\u00b3\u2074\u2075\u2076\u2077\u2078\u2079");
         QString power = match.captured(1).isEmpty() ? QString() : QStringLiteral("\u207b");
         for (const QChar digit : match.captured(2))
             power += superscripts[digit.digitValue()];
@@ -64,7 +67,15 @@ QString SheetFormat::requiredOd(double exactOd) const
 QString SheetFormat::divergence(units::Angle angle) const
 {
     // Divergences are given in mrad on data sheets; keep that unit rather than switching to µrad.
-    return number(QString::number(angle.milliradians(), 'g', 4).toStdString()) + QStringLiteral(" mrad");
+    return number(QString::number(angle.milliradians(), 'g', 4).toStdString() + " mrad");
+}
+
+QString SheetFormat::beamDiameter(units::Length diameter) const
+{
+    // Beam diameters read in mm on data sheets; only a fibre core or a focus is given in µm.
+    if (diameter.millimetres() < 0.1)
+        return quantity(diameter);
+    return number(QString::number(diameter.millimetres(), 'g', 4).toStdString() + " mm");
 }
 
 QString SheetFormat::distance(const hazard::HazardDistance& d) const

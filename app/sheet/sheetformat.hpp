@@ -34,6 +34,7 @@ public:
     // Required OD rounded up to one decimal ("none" when no filter is needed).
     [[nodiscard]] QString requiredOd(double exactOd) const;
     [[nodiscard]] QString divergence(units::Angle angle) const;
+    [[nodiscard]] QString beamDiameter(units::Length diameter) const;
     [[nodiscard]] QString distance(const hazard::HazardDistance& distance) const;
     // An ISO 8601 time stamp as "2026-12-01 14:03 UTC" (dates stay ISO: unambiguous in every language).
     [[nodiscard]] static QString timeStamp(const std::string& iso);

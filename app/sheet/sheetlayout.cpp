@@ -31,7 +31,13 @@ FirstHeader firstHeader(const SheetModel& m)
 {
     return FirstHeader{
         Text{Sheet::tr("HAZARD SHEET"), sheetFont(8.5, QFont::Bold), palette::kNavy},
-        Text{m.laserName, sheetFont(19, QFont::Bold), palette::kInk},
+        // A long name steps down in size rather than taking half the page.
+        Text{m.laserName,
+             sheetFont(m.laserName.size() > 48   ? 14
+                       : m.laserName.size() > 26 ? 16
+                                                 : 19,
+                       QFont::Bold),
+             palette::kInk},
         Text{m.laserLine, sheetFont(9.5), palette::kInk, Qt::AlignLeft, static_cast<int>(m.laserClass.size())},
         Text{m.labName, sheetFont(10, QFont::Bold), palette::kInk, Qt::AlignRight},
         Text{m.roomLine, sheetFont(9), palette::kInk, Qt::AlignRight},
@@ -89,18 +95,18 @@ SheetLayout::SheetLayout(std::shared_ptr<const SheetModel> model, const QString&
     const double leftW = m_width * 0.5;
     const double rightW = m_width * 0.5 - pt(10);
     const double leftH = textHeight(h.label, leftW) + pt(2) + textHeight(h.name, leftW);
-    const double rightH = pt(2) + textHeight(h.lab, rightW) + pt(2) + textHeight(h.room, rightW) +
-                          textHeight(h.lso, rightW);
+    const double rightH =
+        pt(2) + textHeight(h.lab, rightW) + pt(2) + textHeight(h.room, rightW) + textHeight(h.lso, rightW);
     m_firstHeader = std::max(leftH, rightH) + pt(3) + textHeight(h.laser, m_width) + pt(5) + kRuleWidth + pt(9);
 
     const RunningHeader r = runningHeader(*m_model);
     m_runningHeader = std::max(textHeight(r.title, m_width * 0.6), textHeight(r.lab, m_width * 0.4 - pt(10))) + pt(5) +
                       kRuleWidth + pt(9);
 
-    m_caution = std::max(textHeight(cautionText(*m_model, 0), cautionTextWidth(m_width)), pt(18)) + 2 * kCautionPad +
-                pt(11);
-    m_shortCaution = std::max(textHeight(cautionText(*m_model, 1), cautionTextWidth(m_width)), pt(18)) +
-                     2 * kCautionPad + pt(11);
+    m_caution =
+        std::max(textHeight(cautionText(*m_model, 0), cautionTextWidth(m_width)), pt(18)) + 2 * kCautionPad + pt(11);
+    m_shortCaution =
+        std::max(textHeight(cautionText(*m_model, 1), cautionTextWidth(m_width)), pt(18)) + 2 * kCautionPad + pt(11);
     m_footer = pt(4) + textHeight(footerText(*m_model), m_width * 0.75);
 
     m_body = buildBody(m_model, SheetFormat(language), m_width);
@@ -216,7 +222,8 @@ void SheetLayout::paintFrame(QPainter& painter, int page) const
     painter.restore();
     const Text icon{QStringLiteral("\u26a0"), sheetFont(17, QFont::Bold), palette::kInk, Qt::AlignHCenter};
     drawText(painter, icon, QPointF(box.left() + kCautionBar + pt(3), box.top() + kCautionPad - pt(2)), kCautionIcon);
-    drawText(painter, cautionText(m, page), QPointF(box.left() + kCautionBar + kCautionIcon + kCautionPad, box.top() + kCautionPad),
+    drawText(painter, cautionText(m, page),
+             QPointF(box.left() + kCautionBar + kCautionIcon + kCautionPad, box.top() + kCautionPad),
              cautionTextWidth(m_width));
 
     // Footer: what made the sheet, and where this page stands.

@@ -8,6 +8,7 @@
 #include <QString>
 #include <QStringList>
 
+#include <limits>
 #include <vector>
 
 namespace beamwarden::sheet {
@@ -93,7 +94,7 @@ struct SheetModel {
     QString lsoLine;
     QString laserClass; // "Class 4", or that it is not recorded
     QString laserLine;  // class, maker/model, serial
-    QString basisLine; // rule sets, C5 option, program version, date
+    QString basisLine;  // rule sets, C5 option, program version, date
     QString caution;
     QString shortCaution; // continuation pages: the caution in one line
     QString footerLeft;
@@ -112,10 +113,19 @@ struct SheetModel {
 
     QString recordSummary;
     QStringList recordLines;
+    QString recordWarning; // the stored assessment no longer describes the laser, or is not approved
     std::vector<SignOffRow> signOffs;
     QString lsoName;
 };
 
 [[nodiscard]] SheetModel buildSheetModel(const SheetContent& content);
+
+// Shared by the model's source files.
+class SheetFormat;
+// Whether a line of `eye` inside [from, to] nm rests on a reconstructed limit row.
+[[nodiscard]] bool anyLineReconstructed(const hazard::HazardResult& eye, double from_nm = 0.0,
+                                        double to_nm = std::numeric_limits<double>::infinity());
+// Fills the eyewear fields of `model` (sheeteyewearmodel.cpp).
+void addEyewearModel(SheetModel& model, const SheetContent& content, const SheetFormat& format);
 
 } // namespace beamwarden::sheet

@@ -113,7 +113,8 @@ Result<int> writePdf(const SheetContent& content, const QString& path, PageSize 
 
     QSaveFile file(path);
     if (!file.open(QIODevice::WriteOnly))
-        return fail("path", path.toStdString(), "a file that can be written (" + file.errorString().toStdString() + ")");
+        return fail("path", path.toStdString(),
+                    "a file that can be written (" + file.errorString().toStdString() + ")");
     int pages = 0;
     {
         QPdfWriter writer(&file);
@@ -128,7 +129,8 @@ Result<int> writePdf(const SheetContent& content, const QString& path, PageSize 
         painter.end();
     }
     if (!file.commit())
-        return fail("path", path.toStdString(), "a file that can be written (" + file.errorString().toStdString() + ")");
+        return fail("path", path.toStdString(),
+                    "a file that can be written (" + file.errorString().toStdString() + ")");
     return pages;
 }
 

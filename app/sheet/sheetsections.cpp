@@ -80,9 +80,10 @@ void addRow(BodyBlocks& out, const Table& table, std::vector<Cell> cells, int he
             QColor fill = {})
 {
     const double h = table.height(cells);
-    out.blocks.push_back(Block{h, keepWithNext, header, [table, cells = std::move(cells), h, fill](QPainter& p, QPointF at) {
-                                   table.paint(p, cells, at, h, fill);
-                               }});
+    out.blocks.push_back(
+        Block{h, keepWithNext, header, [table, cells = std::move(cells), h, fill](QPainter& p, QPointF at) {
+                  table.paint(p, cells, at, h, fill);
+              }});
 }
 
 int addHeader(BodyBlocks& out, const Table& table, std::vector<Cell> cells, const QString& continuedTitle)
@@ -91,14 +92,15 @@ int addHeader(BodyBlocks& out, const Table& table, std::vector<Cell> cells, cons
     const Text title{continuedTitle, sheetFont(8.5, QFont::Bold), palette::kNavy};
     const double width = std::accumulate(table.widths.begin(), table.widths.end(), 0.0);
     const double titleH = textHeight(title, width) + pt(3);
-    out.headers.push_back(RepeatedHeader{h, h + titleH, [table, cells = std::move(cells), h, title, titleH, width](
-                                                            QPainter& p, QPointF at, bool continued) {
-                                             if (continued) {
-                                                 drawText(p, title, at, width);
-                                                 at.ry() += titleH;
-                                             }
-                                             table.paint(p, cells, at, h, QColor(), true);
-                                         }});
+    out.headers.push_back(RepeatedHeader{
+        h, h + titleH,
+        [table, cells = std::move(cells), h, title, titleH, width](QPainter& p, QPointF at, bool continued) {
+            if (continued) {
+                drawText(p, title, at, width);
+                at.ry() += titleH;
+            }
+            table.paint(p, cells, at, h, QColor(), true);
+        }});
     return static_cast<int>(out.headers.size()) - 1;
 }
 
@@ -131,7 +133,7 @@ Text verdictText(const Figure& figure, bool over)
 void addOutputs(BodyBlocks& out, const SheetModel& m, double width)
 {
     addSection(out, Sheet::tr("Outputs and exposure cases"), width);
-    const Table table = tableOf(width, {0.235, 0.275, 0.125, 0.125, 0.13, 0.11});
+    const Table table = tableOf(width, {0.225, 0.265, 0.125, 0.125, 0.14, 0.12});
     const int header = addHeader(out, table,
                                  {{headerText(Sheet::tr("Exposure case"))},
                                   {headerText(Sheet::tr("MPE (governing rule)"))},
@@ -142,8 +144,8 @@ void addOutputs(BodyBlocks& out, const SheetModel& m, double width)
                                  Sheet::tr("Outputs and exposure cases (continued)"));
     for (const OutputRows& o : m.outputs) {
         // The output on one line across the table: name in bold, then its light, timing and beam.
-        const QString line = o.name + QStringLiteral("   ") +
-                             QStringList{o.light, o.timing, o.beam}.join(QStringLiteral(" \u00b7 "));
+        const QString line =
+            o.name + QStringLiteral("   ") + QStringList{o.light, o.timing, o.beam}.join(QStringLiteral(" \u00b7 "));
         Text text{line, sheetFont(8), palette::kInk};
         text.boldPrefix = static_cast<int>(o.name.size());
         const Table full = tableOf(width, {1.0});
@@ -197,24 +199,25 @@ void addEyewear(BodyBlocks& out, const SheetModel& m, const SheetFormat& format,
                     {headerText(Sheet::tr("Required OD"))},
                     {headerText(m.providedHeader)}});
     for (const BandRow& b : m.bands) {
-        rows.push_back({{body(b.band), muted(b.outputs)},
-                        {body(marked(b.required), 9, QFont::Bold)},
-                        {b.providedShort ? Text{b.provided, sheetFont(8, QFont::Bold), palette::kVermillion}
-                                         : body(b.provided)}});
+        rows.push_back(
+            {{body(b.band), muted(b.outputs)},
+             {body(marked(b.required), 9, QFont::Bold)},
+             {b.providedShort ? Text{b.provided, sheetFont(8, QFont::Bold), palette::kVermillion} : body(b.provided)}});
     }
     double tableHeight = 0.0;
     for (const auto& row : rows)
         tableHeight += bands.height(row);
-    const bool marks = std::any_of(m.bands.begin(), m.bands.end(), [](const BandRow& b) { return b.required.reconstructed; });
-    const Text markNote = muted(Sheet::tr("\u2020 rests on a reconstructed limit row: see the footnote under the outputs."), 7);
+    const bool marks =
+        std::any_of(m.bands.begin(), m.bands.end(), [](const BandRow& b) { return b.required.reconstructed; });
+    const Text markNote =
+        muted(Sheet::tr("\u2020 rests on a reconstructed limit row: see the footnote under the outputs."), 7);
     if (marks)
         tableHeight += pt(2) + textHeight(markNote, leftWidth);
     const Text plotTitle{Sheet::tr("Required OD and eyewear OD"), sheetFont(8.5, QFont::Bold), palette::kNavy};
     const double plotNeeds = textHeight(plotTitle, rightWidth) + pt(2) + odPlotOverhead(m.plot, rightWidth) + pt(68);
     const double h = std::max(leadHeight + tableHeight, plotNeeds) + pt(8);
     const PlotData plot = m.plot;
-    out.blocks.push_back(Block{h, false, -1,
-                               [=](QPainter& p, QPointF at) {
+    out.blocks.push_back(Block{h, false, -1, [=](QPainter& p, QPointF at) {
                                    double y = at.y();
                                    for (const Text& t : lead)
                                        y += drawText(p, t, QPointF(at.x(), y), leftWidth) + pt(1.5);
@@ -246,9 +249,9 @@ void addEyewear(BodyBlocks& out, const SheetModel& m, const SheetFormat& format,
             name.push_back(muted(Sheet::tr("shown in the plot")));
         const Text verdict = r.verdict == eyewear::Verdict::FallsShort
                                  ? Text{r.verdictText, sheetFont(8, QFont::Bold), palette::kVermillion}
-                             : r.verdict == eyewear::Verdict::Covers ? body(r.verdictText, 8, QFont::Bold)
-                                                                     : Text{r.verdictText, sheetFont(8, QFont::Normal, true),
-                                                                            palette::kInk};
+                             : r.verdict == eyewear::Verdict::Covers
+                                 ? body(r.verdictText, 8, QFont::Bold)
+                                 : Text{r.verdictText, sheetFont(8, QFont::Normal, true), palette::kInk};
         addRow(out, shelf, {name, {verdict}, {body(r.reason, 7.5)}}, header, false);
     }
 }
@@ -275,6 +278,9 @@ void addRecord(BodyBlocks& out, const SheetModel& m, double width)
     addSection(out, Sheet::tr("Assessment record and signatures"), width);
     // The record and the signature lines below it stay together: a signature needs the status it signs.
     addParagraph(out, body(m.recordSummary, 8.5, QFont::Bold), width, pt(2), true);
+    if (!m.recordWarning.isEmpty())
+        addParagraph(out, Text{m.recordWarning, sheetFont(8.5, QFont::Bold), palette::kVermillion}, width, pt(1.5),
+                     true);
     for (const QString& line : m.recordLines)
         addParagraph(out, body(line, 8), width, pt(1.5), true);
     if (m.signOffs.empty())
@@ -294,6 +300,10 @@ void addRecord(BodyBlocks& out, const SheetModel& m, double width)
 void addSignatures(BodyBlocks& out, const SheetModel& m, double width)
 {
     out.blocks.back().height += pt(4);
+    // After a sign-off history, a label keeps the two tables apart.
+    if (!m.signOffs.empty())
+        addParagraph(out, Text{Sheet::tr("Signatures"), sheetFont(8.5, QFont::Bold), palette::kNavy}, width, pt(1),
+                     true);
     const Table table = tableOf(width, {0.28, 0.30, 0.14, 0.28});
     const std::vector<Cell> head{{headerText(Sheet::tr("Role"))},
                                  {headerText(Sheet::tr("Name"))},
@@ -302,30 +312,39 @@ void addSignatures(BodyBlocks& out, const SheetModel& m, double width)
     const QStringList roles{Sheet::tr("Laser safety officer"), Sheet::tr("Responsible for the laser"),
                             Sheet::tr("User, briefed on this sheet")};
     const double headH = table.height(head);
-    const double rowH = pt(20);
-    const double h = headH + rowH * static_cast<double>(roles.size()) + pt(4);
-    const QString lso = m.lsoName;
-    out.blocks.push_back(Block{h, false, -1, [=](QPainter& p, QPointF at) {
-                                   table.paint(p, head, at, headH, QColor(), true);
-                                   double y = at.y() + headH;
-                                   for (qsizetype i = 0; i < roles.size(); ++i) {
-                                       drawText(p, body(roles[i], 8.5, QFont::Bold),
-                                                QPointF(at.x() + kPadX, y + pt(7)), table.widths[0] - 2 * kPadX);
-                                       if (i == 0 && !lso.isEmpty())
-                                           drawText(p, body(lso, 8.5),
-                                                    QPointF(at.x() + table.widths[0] + kPadX, y + pt(7)),
-                                                    table.widths[1] - 2 * kPadX);
-                                       // Writing lines in the name, date and signature columns.
-                                       double x = at.x() + table.widths[0];
-                                       for (std::size_t c = 1; c < table.widths.size(); ++c) {
-                                           p.fillRect(QRectF(x + kPadX, y + rowH - pt(5), table.widths[c] - 2 * kPadX,
-                                                             pt(0.7)),
-                                                      palette::kInk);
-                                           x += table.widths[c];
-                                       }
-                                       y += rowH;
-                                   }
-                               }});
+    // Each row is tall enough to write in and for its role (a long role wraps); the writing lines sit at its foot.
+    std::vector<Text> roleTexts;
+    std::vector<double> rowHeights;
+    double h = headH + pt(4);
+    for (const QString& role : roles) {
+        roleTexts.push_back(body(role, 8.5, QFont::Bold));
+        rowHeights.push_back(std::max(pt(20), textHeight(roleTexts.back(), table.widths[0] - 2 * kPadX) + pt(9)));
+        h += rowHeights.back();
+    }
+    const Text lso = body(m.lsoName, 8.5);
+    out.blocks.push_back(
+        Block{h, false, -1, [=](QPainter& p, QPointF at) {
+                  table.paint(p, head, at, headH, QColor(), true);
+                  double y = at.y() + headH;
+                  for (std::size_t i = 0; i < roleTexts.size(); ++i) {
+                      const double line = y + rowHeights[i] - pt(5);
+                      const double roleWidth = table.widths[0] - 2 * kPadX;
+                      drawText(p, roleTexts[i], QPointF(at.x() + kPadX, line - textHeight(roleTexts[i], roleWidth)),
+                               roleWidth);
+                      if (i == 0 && !lso.text.isEmpty()) {
+                          const double nameWidth = table.widths[1] - 2 * kPadX;
+                          drawText(p, lso, QPointF(at.x() + table.widths[0] + kPadX, line - textHeight(lso, nameWidth)),
+                                   nameWidth);
+                      }
+                      // Writing lines in the name, date and signature columns.
+                      double x = at.x() + table.widths[0];
+                      for (std::size_t c = 1; c < table.widths.size(); ++c) {
+                          p.fillRect(QRectF(x + kPadX, line, table.widths[c] - 2 * kPadX, pt(0.7)), palette::kInk);
+                          x += table.widths[c];
+                      }
+                      y += rowHeights[i];
+                  }
+              }});
 }
 
 } // namespace

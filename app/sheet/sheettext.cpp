@@ -47,6 +47,9 @@ QFont sheetFont(double points, QFont::Weight weight, bool italic)
     font.setWeight(weight);
     font.setItalic(italic);
     font.setHintingPreference(QFont::PreferNoHinting);
+    // Latin text needs no shaping; without it there are no ligatures, so "fi" stays two letters in the PDF's text
+    // and a search for "figure" or "officer" finds the words.
+    font.setStyleStrategy(QFont::PreferNoShaping);
     return font;
 }
 

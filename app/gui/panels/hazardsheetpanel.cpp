@@ -4,6 +4,7 @@
 #include "widgets/palette.hpp"
 
 #include <QButtonGroup>
+#include <QEvent>
 #include <QFileDialog>
 #include <QHBoxLayout>
 #include <QLabel>
@@ -12,9 +13,9 @@
 #include <QPrintDialog>
 #include <QPrinter>
 #include <QPushButton>
-#include <QResizeEvent>
 #include <QScrollArea>
 #include <QScrollBar>
+#include <QTimer>
 #include <QVBoxLayout>
 
 #include <algorithm>
@@ -84,7 +85,14 @@ HazardSheetPanel::HazardSheetPanel(QWidget* parent) : QWidget(parent)
     m_scroll->setObjectName(QStringLiteral("sheetPreview"));
     m_scroll->setWidgetResizable(true);
     m_scroll->setWidget(m_pagesHost);
-    m_scroll->setStyleSheet(QStringLiteral("#sheetPreview, #sheetPages { background: %1; }").arg(palette::kRail.name()));
+    m_scroll->setStyleSheet(
+        QStringLiteral("#sheetPreview, #sheetPages { background: %1; }").arg(palette::kRail.name()));
+
+    m_scroll->viewport()->installEventFilter(this);
+    m_refit = new QTimer(this);
+    m_refit->setSingleShot(true);
+    m_refit->setInterval(60);
+    connect(m_refit, &QTimer::timeout, this, &HazardSheetPanel::rebuildPreview);
 
     m_empty = new QLabel(tr("Select a laser to preview its hazard sheet."), this);
     m_empty->setAlignment(Qt::AlignCenter);
@@ -171,11 +179,13 @@ void HazardSheetPanel::print()
     painter.end();
 }
 
-void HazardSheetPanel::resizeEvent(QResizeEvent* event)
+bool HazardSheetPanel::eventFilter(QObject* watched, QEvent* event)
 {
-    QWidget::resizeEvent(event);
-    if (m_renderer && std::abs(m_scroll->viewport()->width() - m_previewWidth) > 40)
-        rebuildPreview();
+    // The pages are rendered for the view's width; a panel shown or resized later gets them re-rendered to fit.
+    if (watched == m_scroll->viewport() && event->type() == QEvent::Resize && m_renderer &&
+        std::abs(m_scroll->viewport()->width() - m_previewWidth) > 40)
+        m_refit->start();
+    return QWidget::eventFilter(watched, event);
 }
 
 void HazardSheetPanel::chooseExportPath()
@@ -207,15 +217,14 @@ void HazardSheetPanel::rebuildPreview()
         return;
     }
     const int pages = m_renderer->pageCount();
-    m_pageInfo->setText(tr("%1 page(s), %2")
-                            .arg(pages)
-                            .arg(m_pageSize == sheet::PageSize::Letter ? tr("US Letter") : tr("A4")));
+    m_pageInfo->setText(
+        tr("%1 page(s), %2").arg(pages).arg(m_pageSize == sheet::PageSize::Letter ? tr("US Letter") : tr("A4")));
 
     // Pages as wide as the view allows (up to a comfortable reading size), sharp on high-density screens.
     m_previewWidth = m_scroll->viewport()->width();
     const QSizeF paper = sheet::pageLayout(m_pageSize).fullRect(QPageLayout::Point).size();
-    const double fitDpi = (m_previewWidth - 2 * kPageGap - m_scroll->verticalScrollBar()->sizeHint().width()) /
-                          (paper.width() / 72.0);
+    const double fitDpi =
+        (m_previewWidth - 2 * kPageGap - m_scroll->verticalScrollBar()->sizeHint().width()) / (paper.width() / 72.0);
     const double dpi = std::clamp(fitDpi, 40.0, kMaxPreviewDpi);
     const double ratio = devicePixelRatioF();
     for (int page = 0; page < pages; ++page) {

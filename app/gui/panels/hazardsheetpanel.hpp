@@ -11,6 +11,7 @@ class QButtonGroup;
 class QLabel;
 class QPushButton;
 class QScrollArea;
+class QTimer;
 class QVBoxLayout;
 
 namespace beamwarden::sheet {
@@ -41,7 +42,7 @@ public:
     [[nodiscard]] QString lastError() const { return m_lastError; }
 
 protected:
-    void resizeEvent(QResizeEvent* event) override;
+    bool eventFilter(QObject* watched, QEvent* event) override;
 
 private:
     void chooseExportPath();
@@ -60,6 +61,7 @@ private:
     QWidget* m_pagesHost = nullptr;
     QVBoxLayout* m_pagesLayout = nullptr;
     QLabel* m_empty = nullptr;
+    QTimer* m_refit = nullptr; // re-renders the preview once the view has settled at a new width
     int m_previewWidth = 0;
 };
 
