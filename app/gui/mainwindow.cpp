@@ -1,6 +1,7 @@
 #include "mainwindow.hpp"
 
 #include "beamwarden/caution.hpp"
+#include "beamwarden/store/eyewearcsv.hpp"
 #include "beamwarden/store/labexport.hpp"
 #include "document/labdocument.hpp"
 #include "panels/assessmentpanel.hpp"
@@ -538,9 +539,23 @@ void MainWindow::exportLab()
 
 void MainWindow::importEyewearCsv()
 {
-    QMessageBox::information(this, tr("Import eyewear CSV"),
-                             tr("Use 'beamwarden-cli lab import-eyewear LAB FILE.csv'; the file is checked in full "
-                                "before anything is written."));
+    if (!m_document)
+        return;
+    const QString in = QFileDialog::getOpenFileName(this, tr("Import eyewear inventory"), QString(),
+                                                    tr("CSV files (*.csv);;All files (*)"));
+    if (in.isEmpty())
+        return;
+    // All or nothing: the store checks every row before it writes any (docs/lab-export.md lists the columns).
+    auto added = store::importEyewearCsv(m_document->store(), in.toStdString());
+    if (!added) {
+        QMessageBox::warning(this, tr("Import eyewear inventory"),
+                             tr("Nothing was imported: %1").arg(q(added.error().message())));
+        return;
+    }
+    // Reopen from the file so the shelf shows exactly what is stored.
+    const QString path = m_document->filePath();
+    (void)openLab(path);
+    statusBar()->showMessage(tr("Imported %n eyewear item(s).", nullptr, static_cast<int>(added->size())), 8000);
 }
 
 void MainWindow::backupLab()
