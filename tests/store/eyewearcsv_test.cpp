@@ -53,7 +53,7 @@ TEST_CASE("A CSV inventory with quoting, BOM and CRLF reads every column", "[sto
     CHECK_FALSE(g1.spectralOd[1].atLeast);
     CHECK(g1.en207Markings == std::vector<std::string>{"740-1100 D LB7 + IR LB8 + M LB8", "1100-1300 D LB5"});
     CHECK(g1.en208Markings.empty());
-    CHECK(g1.visibleTransmittance == Approx(0.25));
+    CHECK(g1.visibleTransmittance == Approx(0.25)); // computed: the CSV cell "0.25" read back (round trip, no unit)
     CHECK(g1.count == 6);
     CHECK(g1.location == "B112 cabinet");
     CHECK(g1.lastInspection == "2026-02-10");
