@@ -5,6 +5,7 @@
 #include "beamwarden/caution.hpp"
 #include "beamwarden/hazard/report.hpp"
 #include "beamwarden/store/labstore.hpp"
+#include "flagvalues.hpp"
 #include "verbs.hpp"
 
 #include <fmt/core.h>
@@ -35,9 +36,12 @@ int refuse(const InputError& error)
 std::string distance(const hazard::HazardDistance& d)
 {
     switch (d.kind) {
-    case hazard::DistanceKind::Zero: return "0 m";
-    case hazard::DistanceKind::Unbounded: return "no finite distance";
-    case hazard::DistanceKind::Finite: break;
+    case hazard::DistanceKind::Zero:
+        return "0 m";
+    case hazard::DistanceKind::Unbounded:
+        return "no finite distance";
+    case hazard::DistanceKind::Finite:
+        break;
     }
     return units::format(d.value);
 }
@@ -79,18 +83,11 @@ int runAssess(const std::vector<std::string>& argv)
     if (args->positional().size() != 1)
         return refuse(InputError{"LAB", "", "one lab file (.bwlab)"});
     assessment::AssessmentOptions options;
-    if (const auto rules = args->value("rules")) {
-        auto parsed = limits::parseRuleChoice(*rules);
-        if (!parsed)
-            return refuse(InputError{"--rules", *rules, "strictest, iec60825-1:2014 or iec60825-1:2007"});
-        options.rules = *parsed;
-    }
-    if (const auto c5 = args->value("c5")) {
-        auto parsed = limits::parseC5Option(*c5);
-        if (!parsed)
-            return refuse(InputError{"--c5", *c5, "conservative or edition"});
-        options.c5 = *parsed;
-    }
+    const auto flags = ruleFlags(*args);
+    if (!flags)
+        return refuse(flags.error());
+    options.rules = flags->rules;
+    options.c5 = flags->c5;
     auto store = store::LabStore::open(args->positional().front());
     if (!store)
         return refuse(store.error());

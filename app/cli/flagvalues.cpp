@@ -5,6 +5,24 @@
 
 namespace beamwarden::cli {
 
+Result<RuleFlags> ruleFlags(const Arguments& args)
+{
+    RuleFlags flags;
+    if (const auto rules = args.value("rules")) {
+        auto parsed = limits::parseRuleChoice(*rules);
+        if (!parsed)
+            return fail("--rules", *rules, "strictest, iec60825-1:2014 or iec60825-1:2007");
+        flags.rules = *parsed;
+    }
+    if (const auto c5 = args.value("c5")) {
+        auto parsed = limits::parseC5Option(*c5);
+        if (!parsed)
+            return fail("--c5", *c5, "conservative or edition");
+        flags.c5 = *parsed;
+    }
+    return flags;
+}
+
 Result<std::optional<double>> optionalNumber(const Arguments& args, const std::string& flag, double lo, double hi,
                                              const std::string& allowed)
 {

@@ -1,6 +1,7 @@
 #pragma once
 // Reading typed values from flags: each helper refuses with the flag's name, so every verb reports alike.
 #include "arguments.hpp"
+#include "beamwarden/limits/types.hpp"
 #include "beamwarden/units.hpp"
 
 #include <optional>
@@ -21,6 +22,14 @@ Result<std::optional<Q>> optionalQuantity(const Arguments& args, const std::stri
         return std::unexpected(value.error());
     return std::optional<Q>{*value};
 }
+
+// --rules and --c5, shared by every verb that evaluates limits; absent flags keep the defaults (strictest,
+// conservative).
+struct RuleFlags {
+    limits::RuleChoice rules = limits::RuleChoice::Strictest;
+    limits::C5Option c5 = limits::C5Option::Conservative;
+};
+[[nodiscard]] Result<RuleFlags> ruleFlags(const Arguments& args);
 
 // A plain number in [lo, hi], e.g. a reflectance or a numerical aperture.
 [[nodiscard]] Result<std::optional<double>> optionalNumber(const Arguments& args, const std::string& flag, double lo,

@@ -213,18 +213,9 @@ Result<hazard::HazardRequest> hazardRequestFrom(const Arguments& args)
     if (*transmission)
         c.transmission = **transmission;
 
-    if (const auto rules = args.value("rules")) {
-        auto parsed = limits::parseRuleChoice(*rules);
-        if (!parsed)
-            return fail("--rules", *rules, "strictest, iec60825-1:2014 or iec60825-1:2007");
-        request.rules = *parsed;
-    }
-    if (const auto c5 = args.value("c5")) {
-        auto parsed = limits::parseC5Option(*c5);
-        if (!parsed)
-            return fail("--c5", *c5, "conservative or edition");
-        request.c5 = *parsed;
-    }
+    BW_TRY(flags, ruleFlags(args));
+    request.rules = flags->rules;
+    request.c5 = flags->c5;
     return request;
 }
 

@@ -4,6 +4,7 @@
 #include "beamwarden/caution.hpp"
 #include "beamwarden/limits/mpe.hpp"
 #include "beamwarden/limits/report.hpp"
+#include "flagvalues.hpp"
 #include "verbs.hpp"
 
 #include <charconv>
@@ -86,18 +87,11 @@ Result<MpeRequest> requestFrom(const Arguments& args)
             return fail("--target", *target, "eye or skin");
         request.target = *parsed;
     }
-    if (const auto rules = args.value("rules")) {
-        auto parsed = parseRuleChoice(*rules);
-        if (!parsed)
-            return fail("--rules", *rules, "strictest, iec60825-1:2014 or iec60825-1:2007");
-        request.rules = *parsed;
-    }
-    if (const auto c5 = args.value("c5")) {
-        auto parsed = parseC5Option(*c5);
-        if (!parsed)
-            return fail("--c5", *c5, "conservative or edition");
-        request.c5 = *parsed;
-    }
+    auto flags = ruleFlags(args);
+    if (!flags)
+        return std::unexpected(flags.error());
+    request.rules = flags->rules;
+    request.c5 = flags->c5;
     if (const auto angle = args.value("source-angle")) {
         auto parsed = units::parseAngle(*angle, "--source-angle");
         if (!parsed)

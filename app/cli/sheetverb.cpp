@@ -3,6 +3,7 @@
 #include "arguments.hpp"
 #include "beamwarden/caution.hpp"
 #include "beamwarden/store/labstore.hpp"
+#include "flagvalues.hpp"
 #include "sheetcontent.hpp"
 #include "sheetrenderer.hpp"
 #include "sheettranslator.hpp"
@@ -111,18 +112,11 @@ int runSheet(const std::vector<std::string>& argv)
     if (language != "en" && language != "de")
         return refuse(InputError{"--language", language, "en or de"});
     assessment::AssessmentOptions options;
-    if (const auto rules = args->value("rules")) {
-        auto parsed = limits::parseRuleChoice(*rules);
-        if (!parsed)
-            return refuse(InputError{"--rules", *rules, "strictest, iec60825-1:2014 or iec60825-1:2007"});
-        options.rules = *parsed;
-    }
-    if (const auto c5 = args->value("c5")) {
-        auto parsed = limits::parseC5Option(*c5);
-        if (!parsed)
-            return refuse(InputError{"--c5", *c5, "conservative or edition"});
-        options.c5 = *parsed;
-    }
+    const auto flags = ruleFlags(*args);
+    if (!flags)
+        return refuse(flags.error());
+    options.rules = flags->rules;
+    options.c5 = flags->c5;
 
     auto labStore = store::LabStore::open(args->positional().front());
     if (!labStore)

@@ -51,3 +51,8 @@ TEST_CASE("The caution stays visible on every panel, folded or not", "[gui]")
     CHECK(strip->isVisible());
     CHECK(text->text().contains(QStringLiteral("laser safety officer")));
 }
+
+TEST_CASE("The caution lupdate sees is the caution core prints", "[gui][i18n]")
+{
+    CHECK(std::string(beamwarden::gui::kCautionSourceText) == std::string(beamwarden::caution()));
+}

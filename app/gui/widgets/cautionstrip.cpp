@@ -10,6 +10,12 @@
 
 namespace beamwarden::gui {
 
+const char* const kCautionSourceText = QT_TRANSLATE_NOOP(
+    "Caution", "Caution: these figures follow the published formula structure of the rule set named with them. They "
+               "support, and never replace, the judgement of your institution's laser safety officer; local "
+               "regulations and the manufacturer's data take precedence. Check every input before relying on a "
+               "figure.");
+
 CautionStrip::CautionStrip(QWidget* parent) : QFrame(parent)
 {
     setObjectName(QStringLiteral("cautionStrip"));

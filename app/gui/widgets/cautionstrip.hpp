@@ -7,6 +7,10 @@ class QToolButton;
 
 namespace beamwarden::gui {
 
+// The caution's English text as lupdate sees it (context "Caution"): it must equal core's caution(), which a test
+// checks, so the translation is never dropped as obsolete.
+extern const char* const kCautionSourceText;
+
 class CautionStrip : public QFrame {
     Q_OBJECT
 public:
