@@ -1,9 +1,9 @@
 #include "eyewearverbs.hpp"
 
 #include "beamwarden/caution.hpp"
+#include "beamwarden/eyewear/odtable.hpp"
 #include "beamwarden/eyewear/protection.hpp"
 #include "hazardrequest.hpp"
-#include "beamwarden/eyewear/odtable.hpp"
 #include "verbs.hpp"
 
 #include <fmt/core.h>

@@ -1,8 +1,8 @@
 #include "verbs.hpp"
 
+#include "assessverb.hpp"
 #include "backupverb.hpp"
 #include "beamwarden/caution.hpp"
-#include "assessverb.hpp"
 #include "eyewearverbs.hpp"
 #include "hazardverbs.hpp"
 #include "labverbs.hpp"
