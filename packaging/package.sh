@@ -56,10 +56,28 @@ must() {
 
 package_status() { dpkg-query -W -f='${Status}' beamwarden 2>/dev/null || true; }
 
+# dpkg still knows the package: installed, or removed with files it keeps until a purge.
+package_known() {
+  case "$(package_status)" in
+    "" | "unknown ok not-installed") return 1 ;;
+    *) return 0 ;;
+  esac
+}
+
+# apt-get purge, when there is anything left to purge. A local .deb with no conffiles is forgotten by dpkg as soon as
+# it is removed, and then apt-get purge fails with "Unable to locate package".
+purge_package() {
+  if package_known; then
+    as_root apt-get purge -y beamwarden
+  else
+    echo "dpkg no longer lists beamwarden: nothing left to purge"
+  fi
+}
+
 finish() {
   if [ "$installed" = yes ]; then
     say "removing the package after a failed step"
-    as_root apt-get purge -y -qq beamwarden >/dev/null 2>&1 || say "could not remove beamwarden: remove it by hand"
+    purge_package >/dev/null 2>&1 || say "could not remove beamwarden: remove it by hand"
   fi
   say "$passed step(s) passed, $failed failed (logs: $log)"
   if [ "$failed" -eq 0 ]; then
@@ -128,9 +146,9 @@ metainfo_version() { grep -q "<release version=\"$version\"" "$metainfo"; }
 step "AppStream <releases> names version $version" metainfo_version || true
 
 # --- install -------------------------------------------------------------------------------------------------------
-if [ -n "$(package_status)" ] && [ "$(package_status)" != "unknown ok not-installed" ]; then
+if package_known; then
   say "beamwarden is already installed ($(package_status)); purging it first"
-  as_root apt-get purge -y -qq beamwarden >/dev/null
+  purge_package >/dev/null
 fi
 installed=yes
 must "apt-get install -y ./build/$(basename "$deb")" as_root apt-get install -y "./build/$(basename "$deb")"
@@ -215,7 +233,7 @@ step "MIME type application/x-beamwarden-lab registered (*.bwlab)" mime_register
 # --- uninstall -----------------------------------------------------------------------------------------------------
 remove_package() {
   as_root apt-get remove -y beamwarden
-  as_root apt-get purge -y beamwarden
+  purge_package
 }
 must "apt-get remove -y beamwarden, then purge" remove_package
 installed=no
@@ -224,10 +242,10 @@ nothing_left() {
   local f left=0
   [ ! -e /usr/bin/beamwarden ] || { echo "still there: /usr/bin/beamwarden"; left=1; }
   [ ! -e /usr/bin/beamwarden-cli ] || { echo "still there: /usr/bin/beamwarden-cli"; left=1; }
-  case "$(package_status)" in
-    "" | "unknown ok not-installed") ;;
-    *) echo "dpkg still lists beamwarden: $(package_status)"; left=1 ;;
-  esac
+  if package_known; then
+    echo "dpkg still lists beamwarden: $(package_status)"
+    left=1
+  fi
   # Every file the package brought is gone (directories shared with other packages may stay).
   while read -r f; do
     if [ -f "$f" ] || [ -L "$f" ]; then
