@@ -7,6 +7,7 @@
 #include <algorithm>
 #include <cctype>
 #include <charconv>
+#include <cmath>
 #include <fmt/core.h>
 
 namespace beamwarden::eyewear {
@@ -195,9 +196,17 @@ Result<MarkingTerm> parseTerm(const std::string& text, const std::vector<Wavelen
     return leveled;
 }
 
+// Plain decimals only: "{:g}" writes 1000000 nm as "1e+06", whose '+' would start a new term on reading.
 std::string formatNumber(double nm)
 {
-    return fmt::format("{:g}", nm);
+    if (nm == std::floor(nm))
+        return fmt::format("{:.0f}", nm);
+    std::string text = fmt::format("{:.6f}", nm);
+    while (text.back() == '0')
+        text.pop_back();
+    if (text.back() == '.')
+        text.pop_back();
+    return text;
 }
 
 std::string formatWavelengths(const std::vector<WavelengthSpan>& spans)

@@ -111,6 +111,9 @@ std::string format(Wavelength value, int significant)
             return inUnit(d, -9, "nm");
         if (d.exponent < -3)
             return inUnit(d, -6, "\xC2\xB5m");
+        // Beyond any wavelength a rule covers, metres: "1e309 mm" would not read back as a double.
+        if (d.exponent >= 0)
+            return inUnit(d, 0, "m");
         return inUnit(d, -3, "mm");
     });
 }

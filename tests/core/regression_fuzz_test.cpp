@@ -1,0 +1,123 @@
+// Fuzzing's findings, kept (issue 10). The seeds of tests/fuzz/corpus go through the same promises as the libFuzzer
+// targets (tests/fuzz/promises.hpp), so the normal and sanitizer builds check them too; each finding is reproduced
+// below by its smallest input. A finding not yet fixed is tagged [!shouldfail]: it must still fail, and once the code
+// is fixed the tag comes off (and its seeds leave kOpenFindings).
+#include <catch2/catch.hpp>
+
+#include <filesystem>
+#include <fstream>
+#include <map>
+#include <set>
+#include <sstream>
+#include <string>
+#include <vector>
+
+#include "../fuzz/promises.hpp"
+
+using namespace beamwarden;
+
+namespace {
+
+namespace fs = std::filesystem;
+
+std::string bytes(const fs::path& path)
+{
+    std::ifstream in(path, std::ios::binary);
+    std::ostringstream text;
+    text << in.rdbuf();
+    return text.str();
+}
+
+std::string unitsPromise(const std::string& text)
+{
+    return fuzzpromise::units(
+        std::span<const std::uint8_t>(reinterpret_cast<const std::uint8_t*>(text.data()), text.size()));
+}
+
+using Promise = std::string (*)(const std::string&);
+
+const std::map<std::string, Promise>& promises()
+{
+    static const std::map<std::string, Promise> all = {
+        {"units", &unitsPromise},
+        {"en207", [](const std::string& t) { return fuzzpromise::en207(t); }},
+        {"en208", [](const std::string& t) { return fuzzpromise::en208(t); }},
+        {"odtable", [](const std::string& t) { return fuzzpromise::odTable(t); }},
+        {"labexport", [](const std::string& t) { return fuzzpromise::labExport(t); }},
+        {"eyewearcsv", [](const std::string& t) { return fuzzpromise::eyewearCsv(t); }},
+    };
+    return all;
+}
+
+// Seeds that reproduce an open finding (the test cases below): they still break their promise.
+// All three findings so far are fixed (marking.cpp prints plain decimals; wavelengths of 1 m and more print in m).
+const std::set<std::string> kOpenFindings = {};
+
+} // namespace
+
+TEST_CASE("Fuzz regression: every seed of tests/fuzz/corpus keeps the promises the fuzz targets check", "[fuzz]")
+{
+    const fs::path corpus = fs::path(BEAMWARDEN_SOURCE_DIR) / "tests" / "fuzz" / "corpus";
+    REQUIRE(fs::is_directory(corpus)); // a missing fixture fails, it never skips
+    for (const auto& [target, promise] : promises()) {
+        const fs::path folder = corpus / target;
+        REQUIRE(fs::is_directory(folder));
+        int seeds = 0;
+        for (const auto& entry : fs::directory_iterator(folder)) {
+            const std::string name = target + "/" + entry.path().filename().string();
+            const std::string broken = promise(bytes(entry.path()));
+            INFO(name << ": " << (broken.empty() ? std::string("kept") : broken));
+            if (kOpenFindings.contains(name))
+                CHECK_FALSE(broken.empty()); // fixed? then take it out of kOpenFindings
+            else
+                CHECK(broken.empty());
+            ++seeds;
+        }
+        CHECK(seeds >= 5);
+    }
+}
+
+TEST_CASE("Fuzz finding: an EN 207 marking at 1000000 nm prints as '1e+06', which reads back as two terms",
+          "[fuzz][eyewear]")
+{
+    // fuzz_en207, seed en207/million-nm. marking.cpp formatNumber() prints with {:g}, so 1 mm (1000000 nm, the
+    // parser's own upper end) becomes "1e+06", and the '+' of the exponent then splits the line into terms.
+    const auto marking = eyewear::parseEn207("1000000 D LB1");
+    REQUIRE(marking.has_value()); // the range end is accepted (marking.cpp: 180 to 1000000 nm)
+    const std::string printed = eyewear::format(*marking);
+    INFO(printed);
+    const auto back = eyewear::parseEn207(printed);
+    INFO((back ? std::string("read back") : back.error().message()));
+    REQUIRE(back.has_value()); // marking.hpp: "the output parses back to the same content"
+    CHECK(*back == *marking);
+}
+
+TEST_CASE("Fuzz finding: an EN 208 marking at 1000000 nm prints as '1e+06', which parseEn208 refuses",
+          "[fuzz][eyewear]")
+{
+    // fuzz_en208, seed en208/million-nm: the same printing, through en208.cpp format() and parseEn208().
+    const auto marking = eyewear::parseEn208("1000000 RB1");
+    REQUIRE(marking.has_value());
+    const std::string printed = eyewear::format(*marking);
+    INFO(printed);
+    const auto back = eyewear::parseEn208(printed);
+    INFO((back ? std::string("read back") : back.error().message()));
+    REQUIRE(back.has_value());
+    CHECK(*back == *marking);
+}
+
+TEST_CASE("Fuzz finding: a wavelength of 1e306 m prints as '1e309 mm', beyond what parseWavelength reads",
+          "[fuzz][units]")
+{
+    // fuzz_units, input "01002e303m". The parser accepts any finite length (ranges are the callers'); format() puts
+    // wavelengths above 1 mm in mm, and 1e306 m = 1e309 mm overflows a double when read back.
+    const auto wavelength = units::parseWavelength("1e306 m");
+    REQUIRE(wavelength.has_value());
+    for (const int digits : {1, 4, 17}) {
+        const std::string printed = units::format(*wavelength, digits);
+        INFO(printed);
+        const auto back = units::parseWavelength(printed);
+        INFO((back ? std::string("read back") : back.error().message()));
+        CHECK(back.has_value()); // units.hpp: "The output always parses back with the matching parse*()"
+    }
+}
