@@ -185,26 +185,26 @@ int runCases(bool (*selected)(const json&))
 
 } // namespace
 
-TEST_CASE("Bad inputs: refused flags and values exit 2 naming the field (tests/data/bad/cases.json)", "[cli][bad]")
+TEST_CASE("bad inputs: refused flags and values exit 2 naming the field (tests/data/bad/cases.json)", "[cli][bad]")
 {
     const int count = runCases([](const json& c) { return !isImport(c) && !isCsvImport(c); });
     CHECK(count > 40);
 }
 
-TEST_CASE("Bad inputs: a refused lab import exits 2 naming the field and writes no lab file", "[cli][bad]")
+TEST_CASE("bad inputs: a refused lab import exits 2 naming the field and writes no lab file", "[cli][bad]")
 {
     const int count = runCases(&isImport);
     CHECK(count > 20);
 }
 
-TEST_CASE("Bad inputs: a refused eyewear CSV import exits 2 naming the cell and leaves the lab file as it was",
+TEST_CASE("bad inputs: a refused eyewear CSV import exits 2 naming the cell and leaves the lab file as it was",
           "[cli][bad]")
 {
     const int count = runCases(&isCsvImport);
     CHECK(count > 8);
 }
 
-TEST_CASE("Bad inputs: every file in tests/data/bad belongs to a case, and case ids are unique", "[cli][bad]")
+TEST_CASE("bad inputs: every file in tests/data/bad belongs to a case, and case ids are unique", "[cli][bad]")
 {
     std::set<std::string> ids;
     std::string allArgs;

@@ -190,7 +190,7 @@ std::vector<double> breakpoints(double alpha_rad)
 
 } // namespace
 
-TEST_CASE("Numeric safety: no figure of an accepted hazard evaluation is NaN (random outputs, fixed seed)",
+TEST_CASE("numeric safety: no figure of an accepted hazard evaluation is NaN (random outputs, fixed seed)",
           "[hazard][safety][nan]")
 {
     Random random(20261201);
@@ -214,7 +214,7 @@ TEST_CASE("Numeric safety: no figure of an accepted hazard evaluation is NaN (ra
     CHECK(accepted > total / 2); // or the test proved little
 }
 
-TEST_CASE("Numeric safety: NOHD and required OD never fall as the power or pulse energy grows", "[hazard][safety]")
+TEST_CASE("numeric safety: NOHD and required OD never fall as the power or pulse energy grows", "[hazard][safety]")
 {
     Random random(424242);
     std::vector<std::string> failures;
@@ -262,7 +262,7 @@ TEST_CASE("Numeric safety: NOHD and required OD never fall as the power or pulse
     CHECK(ladders > 300);
 }
 
-TEST_CASE("Numeric safety: the MPE never falls as the exposure duration grows, except at the tables' own steps",
+TEST_CASE("numeric safety: the MPE never falls as the exposure duration grows, except at the tables' own steps",
           "[hazard][safety][monotonic]")
 {
     // check-values.md section 5: across a breakpoint H may fall by the kept steps (K8 -1.2 %, K12 -0.4 %, and at most

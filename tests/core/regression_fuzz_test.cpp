@@ -55,7 +55,7 @@ const std::set<std::string> kOpenFindings = {};
 
 } // namespace
 
-TEST_CASE("Fuzz regression: every seed of tests/fuzz/corpus keeps the promises the fuzz targets check", "[fuzz]")
+TEST_CASE("fuzz regression: every seed of tests/fuzz/corpus keeps the promises the fuzz targets check", "[fuzz]")
 {
     const fs::path corpus = fs::path(BEAMWARDEN_SOURCE_DIR) / "tests" / "fuzz" / "corpus";
     REQUIRE(fs::is_directory(corpus)); // a missing fixture fails, it never skips
@@ -77,7 +77,7 @@ TEST_CASE("Fuzz regression: every seed of tests/fuzz/corpus keeps the promises t
     }
 }
 
-TEST_CASE("Fuzz finding: an EN 207 marking at 1000000 nm prints as '1e+06', which reads back as two terms",
+TEST_CASE("fuzz finding: an EN 207 marking at 1000000 nm prints as '1e+06', which reads back as two terms",
           "[fuzz][eyewear]")
 {
     // fuzz_en207, seed en207/million-nm. marking.cpp formatNumber() prints with {:g}, so 1 mm (1000000 nm, the
@@ -92,7 +92,7 @@ TEST_CASE("Fuzz finding: an EN 207 marking at 1000000 nm prints as '1e+06', whic
     CHECK(*back == *marking);
 }
 
-TEST_CASE("Fuzz finding: an EN 208 marking at 1000000 nm prints as '1e+06', which parseEn208 refuses",
+TEST_CASE("fuzz finding: an EN 208 marking at 1000000 nm prints as '1e+06', which parseEn208 refuses",
           "[fuzz][eyewear]")
 {
     // fuzz_en208, seed en208/million-nm: the same printing, through en208.cpp format() and parseEn208().
@@ -106,7 +106,7 @@ TEST_CASE("Fuzz finding: an EN 208 marking at 1000000 nm prints as '1e+06', whic
     CHECK(*back == *marking);
 }
 
-TEST_CASE("Fuzz finding: a wavelength of 1e306 m prints as '1e309 mm', beyond what parseWavelength reads",
+TEST_CASE("fuzz finding: a wavelength of 1e306 m prints as '1e309 mm', beyond what parseWavelength reads",
           "[fuzz][units]")
 {
     // fuzz_units, input "01002e303m". The parser accepts any finite length (ranges are the callers'); format() puts

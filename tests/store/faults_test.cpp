@@ -278,7 +278,7 @@ std::string integrityOf(const fs::path& path)
 
 } // namespace
 
-TEST_CASE("Store faults: a full disk (SQLITE_FULL) fails the save, says so, and leaves the file as it was",
+TEST_CASE("store faults: a full disk (SQLITE_FULL) fails the save, says so, and leaves the file as it was",
           "[store][faults][full]")
 {
     TempDir dir;
@@ -307,7 +307,7 @@ TEST_CASE("Store faults: a full disk (SQLITE_FULL) fails the save, says so, and 
     CHECK(store->lasers()->size() == 201);
 }
 
-TEST_CASE("Store faults: an import that fills the disk leaves no file behind", "[store][faults][full]")
+TEST_CASE("store faults: an import that fills the disk leaves no file behind", "[store][faults][full]")
 {
     TempDir dir;
     const auto probe = dir / "probe.bwlab";
@@ -333,7 +333,7 @@ TEST_CASE("Store faults: an import that fills the disk leaves no file behind", "
     CHECK_FALSE(hasSidecars(target));
 }
 
-TEST_CASE("Store faults: a write the operating system cuts short (file size limit) fails and loses nothing",
+TEST_CASE("store faults: a write the operating system cuts short (file size limit) fails and loses nothing",
           "[store][faults][full]")
 {
     TempDir dir;
@@ -359,7 +359,7 @@ TEST_CASE("Store faults: a write the operating system cuts short (file size limi
     CHECK(laserCount(path) == 1);
 }
 
-TEST_CASE("Store faults: a read-only lab file refuses writes with a clear error and stays unchanged",
+TEST_CASE("store faults: a read-only lab file refuses writes with a clear error and stays unchanged",
           "[store][faults][read-only]")
 {
     TempDir dir;
@@ -389,7 +389,7 @@ TEST_CASE("Store faults: a read-only lab file refuses writes with a clear error 
     requireSound(path);
 }
 
-TEST_CASE("Store faults: a lab file removed while open is not written to as if it were still there",
+TEST_CASE("store faults: a lab file removed while open is not written to as if it were still there",
           "[store][faults][removed][!shouldfail]")
 {
     // Known problem (issue 10 note): in WAL mode SQLite goes on committing to the journal of a deleted file, so the
@@ -417,7 +417,7 @@ TEST_CASE("Store faults: a lab file removed while open is not written to as if i
     CHECK(laserCount(path) == 1);
 }
 
-TEST_CASE("Store faults: removing an open lab file loses nothing that was saved before, and the path is free again",
+TEST_CASE("store faults: removing an open lab file loses nothing that was saved before, and the path is free again",
           "[store][faults][removed]")
 {
     TempDir dir;
@@ -448,7 +448,7 @@ TEST_CASE("Store faults: removing an open lab file loses nothing that was saved 
     requireSound(path);
 }
 
-TEST_CASE("Store faults: two processes saving to one lab file take turns and both saves arrive whole",
+TEST_CASE("store faults: two processes saving to one lab file take turns and both saves arrive whole",
           "[store][faults][concurrent]")
 {
     TempDir dir;
@@ -492,7 +492,7 @@ TEST_CASE("Store faults: two processes saving to one lab file take turns and bot
     CHECK(laserCount(path) == 1 + kChildLasers + kParentSaves);
 }
 
-TEST_CASE("Store faults: a writer held up past the busy timeout by another process is told the file is locked",
+TEST_CASE("store faults: a writer held up past the busy timeout by another process is told the file is locked",
           "[store][faults][concurrent]")
 {
     TempDir dir;
@@ -597,7 +597,7 @@ Steps countSteps(const std::function<std::string()>& work)
 
 } // namespace
 
-TEST_CASE("Store faults: an import killed at any statement or write leaves no lab file or the whole lab",
+TEST_CASE("store faults: an import killed at any statement or write leaves no lab file or the whole lab",
           "[store][faults][kill]")
 {
     TempDir dir;
@@ -669,7 +669,7 @@ TEST_CASE("Store faults: an import killed at any statement or write leaves no la
     CHECK(nothing > 0);
 }
 
-TEST_CASE("Store faults: an eyewear CSV import killed at any statement or write keeps the old shelf or adds all rows",
+TEST_CASE("store faults: an eyewear CSV import killed at any statement or write keeps the old shelf or adds all rows",
           "[store][faults][kill]")
 {
     TempDir dir;

@@ -11,7 +11,7 @@
 using namespace beamwarden;
 using namespace beamwarden::store;
 
-TEST_CASE("Fuzz regression: every lab-file seed opens and reads, or is refused with an error naming the file",
+TEST_CASE("fuzz regression: every lab-file seed opens and reads, or is refused with an error naming the file",
           "[store][fuzz]")
 {
     const auto seeds = std::filesystem::path(BEAMWARDEN_SOURCE_DIR) / "tests" / "fuzz" / "corpus" / "labfile";
