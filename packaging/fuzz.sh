@@ -62,9 +62,10 @@ for source in "$top"/tests/fuzz/fuzz_*.cpp; do
   status=0
   (cd "$scratch" && "$build/bin/$target" -max_total_time="$seconds" -timeout=20 -rss_limit_mb=2048 \
     -print_final_stats=1 -artifact_prefix="$scratch/findings/" "$scratch/new" "$seeds") >"$log" 2>&1 || status=$?
+  # A target that stops on a seed prints no statistics: these stay empty ("?") rather than stop the script.
   runs=$(sed -n 's/^stat::number_of_executed_units: *//p' "$log" | tail -n 1)
   speed=$(sed -n 's/^stat::average_exec_per_sec: *//p' "$log" | tail -n 1)
-  coverage=$(grep -o 'cov: [0-9]*' "$log" | tail -n 1 | cut -d' ' -f2)
+  coverage=$(sed -n 's/.*cov: \([0-9]*\).*/\1/p' "$log" | tail -n 1)
   found=$(find "$scratch/new" -type f | wc -l)
   verdict=ok
   [ "$status" -eq 0 ] || verdict=FINDING
@@ -74,7 +75,9 @@ for source in "$top"/tests/fuzz/fuzz_*.cpp; do
     failed+=("$target")
     grep -m 3 -E 'ERROR: |broken promise|runtime error|SUMMARY' "$log" | sed 's/^/    /' || true
     for finding in "$scratch"/findings/*; do
-      [ -e "$finding" ] && say "    reproduce: $build/bin/$target $finding"
+      if [ -e "$finding" ]; then
+        say "    reproduce: $build/bin/$target $finding"
+      fi
     done
     say "    log: $log"
   fi
