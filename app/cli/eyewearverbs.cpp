@@ -3,11 +3,14 @@
 #include "beamwarden/caution.hpp"
 #include "beamwarden/eyewear/odtable.hpp"
 #include "beamwarden/eyewear/protection.hpp"
+#include "flagvalues.hpp"
 #include "hazardrequest.hpp"
 #include "verbs.hpp"
 
 #include <fmt/core.h>
 #include <nlohmann/json.hpp>
+
+#include <cmath>
 
 namespace beamwarden::cli {
 
@@ -115,7 +118,7 @@ int runLevel(const std::vector<std::string>& argv)
         return refuse(request.error());
     auto requirement = requirementFor(*request, "output", "as given");
     if (!requirement)
-        return refuse(requirement.error());
+        return refuse(asFlagError(requirement.error(), *args));
     const auto levels = maxLevels(requirement->levels);
     const auto marking = impliedMarking(requirement->levels);
     const std::string markingText = marking ? format(*marking) : "none: a level beyond LB10 is required";
@@ -173,14 +176,26 @@ int runCheck(const std::vector<std::string>& argv)
     }
     model::EyewearItem item;
     item.name = args->value("name").value_or("the eyewear");
-    if (const auto m = args->value("marking"))
+    // A flag given empty is refused, never dropped: the check would otherwise run as if the item had no marking.
+    if (const auto m = args->value("marking")) {
         item.en207Markings = splitLines(*m);
-    if (const auto m = args->value("en208"))
+        if (item.en207Markings.empty())
+            return refuse(
+                InputError{"--marking", "", "an EN 207 marking such as '1064 D LB7' (lines separated by ';')"});
+    }
+    if (const auto m = args->value("en208")) {
         item.en208Markings = splitLines(*m);
+        if (item.en208Markings.empty())
+            return refuse(InputError{"--en208", "", "an EN 208 marking such as '532 RB3' (lines separated by ';')"});
+    }
     if (const auto table = args->value("od-table")) {
         auto rows = readOdTable(*table);
-        if (!rows)
-            return refuse(rows.error());
+        if (!rows) {
+            // The reader names the file and line; the flag goes in front so the message says where it came from.
+            InputError error = rows.error();
+            error.field = error.field == "od-table" ? "--od-table" : "--od-table " + error.field;
+            return refuse(error);
+        }
         item.spectralOd = *rows;
     }
     auto eyewear = parseEyewear(item);
@@ -191,7 +206,7 @@ int runCheck(const std::vector<std::string>& argv)
         return refuse(request.error());
     auto requirement = requirementFor(*request, "the output", "as given");
     if (!requirement)
-        return refuse(requirement.error());
+        return refuse(asFlagError(requirement.error(), *args));
     const OutputCheck check = checkOutput(*eyewear, *requirement);
     const auto marking = impliedMarking(requirement->levels);
     std::vector<std::string> reasons = check.reasons;
@@ -199,13 +214,14 @@ int runCheck(const std::vector<std::string>& argv)
         if (std::find(reasons.begin(), reasons.end(), n) == reasons.end())
             reasons.push_back(n);
     }
+    const bool odKnown = !std::isnan(check.marginOd);
     if (args->has("json")) {
         json out{{"verdict", toString(check.verdict)},
                  {"reasons", reasons},
                  {"required_od", check.requiredOd},
-                 {"provided_od", check.providedOd},
+                 {"provided_od", odKnown ? json(check.providedOd) : json(nullptr)},
                  {"margin_od", std::isfinite(check.marginOd) ? json(check.marginOd) : json(nullptr)},
-                 {"worst_wavelength_nm", check.worstWavelength_nm},
+                 {"worst_wavelength_nm", odKnown ? json(check.worstWavelength_nm) : json(nullptr)},
                  {"required_levels", levelsJson(check.requiredLevels)},
                  {"marking", marking ? json(format(*marking)) : json(nullptr)},
                  {"caution", caution()}};
@@ -213,8 +229,13 @@ int runCheck(const std::vector<std::string>& argv)
         return kExitOk;
     }
     fmt::print("Eyewear check: {}\n  verdict          {}\n", item.name, toString(check.verdict));
-    fmt::print("  required OD      {:.1f}; provided {:.1f} at {:.1f} nm; margin {:+.2f}\n",
-               hazard::roundOdUp(check.requiredOd), check.providedOd, check.worstWavelength_nm, check.marginOd);
+    // A margin that is not a number means the provided OD is not known: say so rather than print "nan".
+    if (std::isnan(check.marginOd))
+        fmt::print("  required OD      {:.1f}; provided: not known; margin: cannot tell\n",
+                   hazard::roundOdUp(check.requiredOd));
+    else
+        fmt::print("  required OD      {:.1f}; provided {:.1f} at {:.1f} nm; margin {:+.2f}\n",
+                   hazard::roundOdUp(check.requiredOd), check.providedOd, check.worstWavelength_nm, check.marginOd);
     fmt::print("  required levels  {}\n  implied marking  {}\n", levelsText(check.requiredLevels),
                marking ? format(*marking) : "none: a level beyond LB10 is required");
     for (const std::string& r : reasons)

@@ -23,6 +23,17 @@ Result<RuleFlags> ruleFlags(const Arguments& args)
     return flags;
 }
 
+InputError asFlagError(InputError error, const Arguments& args)
+{
+    if (error.field.empty() || error.field.starts_with("--") || error.field.find_first_of(":[. ") != std::string::npos)
+        return error;
+    const std::string flag = error.field;
+    error.field = "--" + flag;
+    if (const auto given = args.value(flag); given && !error.value.empty())
+        error.value = *given;
+    return error;
+}
+
 Result<std::optional<double>> optionalNumber(const Arguments& args, const std::string& flag, double lo, double hi,
                                              const std::string& allowed)
 {

@@ -31,6 +31,11 @@ struct RuleFlags {
 };
 [[nodiscard]] Result<RuleFlags> ruleFlags(const Arguments& args);
 
+// A core refusal in the command line's words: the field as its flag ("power" -> "--power") and, when the user gave
+// that flag, the value quoted as typed rather than as the core prints the number. Fields that are no flag name
+// ("lines[0].wavelength", "the eyewear: en207[0]: marking") keep their own text.
+[[nodiscard]] InputError asFlagError(InputError error, const Arguments& args);
+
 // A plain number in [lo, hi], e.g. a reflectance or a numerical aperture.
 [[nodiscard]] Result<std::optional<double>> optionalNumber(const Arguments& args, const std::string& flag, double lo,
                                                            double hi, const std::string& allowed);

@@ -53,7 +53,7 @@ Result<model::Spectrum> spectrumFrom(const Arguments& args)
         return model::gaussianBand(*w, *fwhm);
     }
     if (w->si() < 180e-9 || w->si() > 1e-3)
-        return fail("--wavelength", format(*w), "180 nm to 1 mm");
+        return fail("--wavelength", *wavelength, "180 nm to 1 mm");
     return model::singleLine(*w);
 }
 
@@ -112,6 +112,12 @@ Result<hazard::HazardRequest> hazardRequestFrom(const Arguments& args)
     BW_TRY(duration, optionalQuantity<Duration>(args, "duration", parseDuration));
     BW_TRY(prf, optionalQuantity<Frequency>(args, "prf", parseFrequency));
     BW_TRY(exposure, optionalQuantity<Duration>(args, "exposure", parseDuration));
+    // The emission reads zero as "not given" (a pulsed output may give either power or energy), so a zero typed
+    // here is refused now, in the range the core allows, rather than taken for a missing value.
+    if (*power && (*power)->si() == 0.0)
+        return fail("--power", *args.value("power"), model::allowedRange(model::Quantity::AveragePower));
+    if (*energy && (*energy)->si() == 0.0)
+        return fail("--pulse-energy", *args.value("pulse-energy"), model::allowedRange(model::Quantity::PulseEnergy));
     model::Emission& e = request.emission;
     e.pulsed = prf->has_value();
     if (*power)

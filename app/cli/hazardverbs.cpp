@@ -2,6 +2,7 @@
 
 #include "beamwarden/caution.hpp"
 #include "beamwarden/hazard/report.hpp"
+#include "flagvalues.hpp"
 #include "hazardrequest.hpp"
 #include "verbs.hpp"
 
@@ -130,10 +131,7 @@ int run(const std::vector<std::string>& argv, const char* verb, const char* summ
     }
     auto result = evaluateHazard(*request);
     if (!result) {
-        InputError error = result.error();
-        if (!error.field.starts_with("--"))
-            error.field = "--" + error.field;
-        fmt::print(stderr, "beamwarden-cli {}: {}\n", verb, error.message());
+        fmt::print(stderr, "beamwarden-cli {}: {}\n", verb, asFlagError(result.error(), *args).message());
         return kExitBadInput;
     }
     if (args->has("json"))

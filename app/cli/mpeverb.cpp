@@ -144,14 +144,6 @@ Result<MpeRequest> requestFrom(const Arguments& args)
     return request;
 }
 
-// Flag names for the core's field names, so a refusal points at what the user typed.
-InputError asFlagError(InputError error)
-{
-    if (!error.field.starts_with("--"))
-        error.field = "--" + error.field;
-    return error;
-}
-
 void printText(const MpeResult& result)
 {
     const MpeRequest& r = result.request;
@@ -222,7 +214,7 @@ int runMpe(const std::vector<std::string>& argv)
         return refuse(request.error());
     auto result = evaluateMpe(*request);
     if (!result)
-        return refuse(asFlagError(result.error()));
+        return refuse(asFlagError(result.error(), *args));
     if (args->has("json"))
         fmt::print("{}\n", toJson(*result).dump(2));
     else

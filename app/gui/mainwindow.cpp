@@ -15,6 +15,7 @@
 #include "sheetcontent.hpp"
 #include "widgets/cautionstrip.hpp"
 #include "widgets/palette.hpp"
+#include "widgets/panelstack.hpp"
 
 #include <QActionGroup>
 #include <QApplication>
@@ -28,7 +29,6 @@
 #include <QListWidget>
 #include <QMenuBar>
 #include <QMessageBox>
-#include <QStackedWidget>
 #include <QStandardPaths>
 #include <QStatusBar>
 #include <QUndoStack>
@@ -107,7 +107,7 @@ MainWindow::MainWindow(QWidget* parent) : QMainWindow(parent)
         refreshDeferredPanels();
     });
 
-    m_pages = new QStackedWidget(this);
+    m_pages = new PanelStack(this);
     for (int i = 0; i < kPanelCount; ++i) {
         const auto panel = static_cast<Panel>(i);
         m_navigation->addItem(panelTitle(panel));

@@ -14,7 +14,6 @@ class QComboBox;
 class QLabel;
 class QListWidget;
 class QMenu;
-class QStackedWidget;
 
 namespace beamwarden::gui {
 
@@ -27,6 +26,7 @@ class LimitCurvesPanel;
 class LabDocument;
 class LasersPanel;
 class PanelPage;
+class PanelStack;
 
 class MainWindow : public QMainWindow {
     Q_OBJECT
@@ -81,7 +81,7 @@ private:
     std::unique_ptr<LabDocument> m_document;
     std::optional<assessment::LaserAssessment> m_assessment;
     QListWidget* m_navigation = nullptr;
-    QStackedWidget* m_pages = nullptr;
+    PanelStack* m_pages = nullptr;
     CautionStrip* m_caution = nullptr;
     QComboBox* m_laserSelector = nullptr;
     QLabel* m_labLabel = nullptr;

@@ -59,7 +59,12 @@ StartupParse parseStartupOptions(const QStringList& arguments)
     const QCommandLineOption laser(QStringLiteral("laser"),
                                    QApplication::translate("Startup", "Laser to select, by name."),
                                    QStringLiteral("NAME"));
-    parser.addOptions({demo, screenshot, language, lab, panel, laser});
+    // For tests/bench/measure_gui: report the first paint (or every panel's) on standard output, then quit.
+    QCommandLineOption firstPaint(QStringLiteral("exit-after-first-paint"), QString());
+    QCommandLineOption everyPanel(QStringLiteral("exit-after-every-panel"), QString());
+    firstPaint.setFlags(QCommandLineOption::HiddenFromHelp);
+    everyPanel.setFlags(QCommandLineOption::HiddenFromHelp);
+    parser.addOptions({demo, screenshot, language, lab, panel, laser, firstPaint, everyPanel});
     parser.addPositionalArgument(QStringLiteral("lab"), QApplication::translate("Startup", "Lab file to open."),
                                  QStringLiteral("[LAB.bwlab]"));
 
@@ -91,6 +96,10 @@ StartupParse parseStartupOptions(const QStringList& arguments)
     options.panel = parser.value(panel);
     options.laser = parser.value(laser);
     options.labFile = parser.value(lab);
+    if (parser.isSet(everyPanel))
+        options.probe = StartupProbe::EveryPanel;
+    else if (parser.isSet(firstPaint))
+        options.probe = StartupProbe::FirstPaint;
     if (!positional.isEmpty()) {
         if (!options.labFile.isEmpty()) {
             std::fprintf(stderr, "beamwarden: give the lab file once (--lab or as an argument)\n");
@@ -148,8 +157,8 @@ int runApplication(QApplication& app, const StartupOptions& options)
     } else if (!options.labFile.isEmpty()) {
         if (auto opened = window.openLab(options.labFile); !opened) {
             std::fprintf(stderr, "beamwarden: %s\n", opened.error().message().c_str());
-            if (!options.screenshotPath.isEmpty())
-                return 2;
+            if (!options.screenshotPath.isEmpty() || options.probe != StartupProbe::None)
+                return 2; // nothing to show or measure without the lab asked for
         }
     }
     if (!options.laser.isEmpty() && window.document()) {
@@ -161,6 +170,7 @@ int runApplication(QApplication& app, const StartupOptions& options)
     }
     if (const auto panel = panelFromName(options.panel))
         window.showPanel(*panel);
+    installStartupProbe(window, options.probe);
     window.show();
 
     if (!options.screenshotPath.isEmpty()) {

@@ -1,6 +1,7 @@
 #pragma once
 // What the command line asks of the GUI at start-up: a lab file or the demo lab, and optionally a screenshot.
 #include "panels/panel.hpp"
+#include "startupprobe.hpp"
 
 #include <QString>
 #include <QStringList>
@@ -18,6 +19,7 @@ struct StartupOptions {
     QString language;       // --language de: force a UI language (otherwise the settings, then the system locale)
     QString panel;          // --panel NAME: the panel to show first (names as in the navigation rail)
     QString laser;          // --laser NAME: the laser to select first
+    StartupProbe probe = StartupProbe::None; // hidden options of the performance measurements
 };
 
 // Parses the arguments; on --help/--version or a bad argument it prints and returns the exit code instead.

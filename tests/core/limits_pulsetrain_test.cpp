@@ -443,7 +443,9 @@ TEST_CASE("K23: rule 2 equals rule 3 for trains filling their Ti groups in the t
     {
         for (const Choice choice : {k2007, k2014c}) {
             INFO(choice.name);
-            const TrainOutcome& t = trainOf(evaluated(pulseTrain(488.0, 10e-9, 1e6, 0.25, choice)).governing());
+            // The result is kept by name: a reference into the temporary would dangle (found by AddressSanitizer).
+            const MpeResult r = evaluated(pulseTrain(488.0, 10e-9, 1e6, 0.25, choice));
+            const TrainOutcome& t = trainOf(r.governing());
             // check-values.md K23 / C10: 2.546e-5 both ways
             CHECK(t.average.perPulse.si() == Approx(2.546e-5).epsilon(1e-3));
             CHECK(t.repeated.perPulse.si() == Approx(2.546e-5).epsilon(1e-3));

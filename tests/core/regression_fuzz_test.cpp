@@ -50,13 +50,10 @@ const std::map<std::string, Promise>& promises()
 }
 
 // Seeds that reproduce an open finding (the test cases here and in tests/store/regression_fuzz_test.cpp): they still
-// break their promise. The first three findings are fixed (marking.cpp prints plain decimals; wavelengths of 1 m and
-// more print in m); open: an EN 207 range narrower than the printed precision (below), eyewear names that are not UTF-8
-// (tests/store/regression_fuzz_test.cpp).
-const std::set<std::string> kOpenFindings = {
-    "en207/range-below-print-precision",
-    "eyewearcsv/not-utf8-names",
-};
+// break their promise. None is open: the 1e+06 markings and the 1e309 mm wavelength (below), the EN 207 range narrower
+// than six decimals (marking.cpp prints the shortest exact decimal) and the eyewear names that are not UTF-8 (the
+// record checks refuse them, tests/store/regression_fuzz_test.cpp) are fixed.
+const std::set<std::string> kOpenFindings = {};
 
 } // namespace
 
@@ -128,18 +125,25 @@ TEST_CASE("fuzz finding: a wavelength of 1e306 m prints as '1e309 mm', beyond wh
 }
 
 TEST_CASE("fuzz finding: an EN 207 range narrower than six decimals prints as 'A-A' and reads back as one wavelength",
-          "[fuzz][eyewear][!shouldfail]")
+          "[fuzz][eyewear]")
 {
     // fuzz_en207 (packaging/fuzz.sh, after the 1e+06 fix), minimised to seed en207/range-below-print-precision.
-    // marking.cpp formatNumber() keeps six decimals, so 5320-5320.0000004 prints as "5320-5320", which reads back as
-    // the single wavelength 5320 and then prints as "5320". fmt's shortest round-trip "{}" would keep every marking
-    // exact (no exponent below 1e16, and markings end at 1e6 nm).
-    const auto marking = eyewear::parseEn207("5320-5320.0000004 D LB3");
-    REQUIRE(marking.has_value());
-    const std::string printed = eyewear::format(*marking);
-    INFO(printed);
-    const auto back = eyewear::parseEn207(printed);
-    REQUIRE(back.has_value());
-    CHECK(*back == *marking);                 // marking.hpp: "parses back to the same content"
-    CHECK(eyewear::format(*back) == printed); // and prints the same again
+    // marking.cpp formatNumber() kept six decimals, so 5320-5320.0000004 printed as "5320-5320", which read back as
+    // the single wavelength 5320. It now prints the shortest plain decimal that reads back as the same double.
+    for (const char* text : {"5320-5320.0000004 D LB3", "1063.9999999999998-1064 D LB7",
+                             "999999.9999999999-1000000 D LB1", "180-180.00000000000003 IR LB2"}) {
+        const auto marking = eyewear::parseEn207(text);
+        REQUIRE(marking.has_value());
+        const std::string printed = eyewear::format(*marking);
+        INFO(text << " -> " << printed);
+        CHECK(printed.find('e') == std::string::npos); // no exponent: its '+' would start a new term
+        CHECK(printed.find('-') != std::string::npos); // a range stays a range
+        const auto back = eyewear::parseEn207(printed);
+        REQUIRE(back.has_value());
+        CHECK(*back == *marking);                 // marking.hpp: "parses back to the same content"
+        CHECK(eyewear::format(*back) == printed); // and prints the same again
+    }
+    // Plain markings print as people write them (common practice: no trailing zeros).
+    CHECK(eyewear::format(*eyewear::parseEn207("1064.5 D LB7")) == "1064.5 D LB7");
+    CHECK(eyewear::format(*eyewear::parseEn207("740-1100 DIR LB5")) == "740-1100 DIR LB5");
 }

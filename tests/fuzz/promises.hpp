@@ -81,9 +81,9 @@ inline std::string units(std::span<const std::uint8_t> bytes)
     }
 }
 
-// marking.hpp: format() "parses back to the same content". Wavelengths print with six significant digits, so the
-// content compared is the terms' modes, levels, Y flags and wavelength spans to 1e-5 relative (computed from %g),
-// and printing the re-read marking gives the same text.
+// marking.hpp: format() "parses back to the same content". Wavelengths print as the shortest decimal that reads back
+// as the same double, so the content compared is the terms' modes, levels, Y flags and wavelength spans exactly, and
+// printing the re-read marking gives the same text.
 inline std::string en207(std::string_view text)
 {
     using namespace beamwarden::eyewear;
@@ -96,7 +96,6 @@ inline std::string en207(std::string_view text)
         return "format() printed '" + printed + "', which parseEn207 refuses: " + back.error().message();
     if (back->terms.size() != marking->terms.size())
         return "format() printed '" + printed + "', which reads back with another number of terms";
-    const auto close = [](double a, double b) { return std::abs(a - b) <= 1e-5 * std::abs(a); };
     for (std::size_t i = 0; i < marking->terms.size(); ++i) {
         const MarkingTerm& a = marking->terms[i];
         const MarkingTerm& b = back->terms[i];
@@ -104,8 +103,8 @@ inline std::string en207(std::string_view text)
             a.wavelengths.size() != b.wavelengths.size())
             return "format() printed '" + printed + "', which reads back as another marking";
         for (std::size_t k = 0; k < a.wavelengths.size(); ++k) {
-            if (!close(a.wavelengths[k].from_nm, b.wavelengths[k].from_nm) ||
-                !close(a.wavelengths[k].to_nm, b.wavelengths[k].to_nm))
+            if (a.wavelengths[k].from_nm != b.wavelengths[k].from_nm ||
+                a.wavelengths[k].to_nm != b.wavelengths[k].to_nm)
                 return "format() printed '" + printed + "', which reads back with other wavelengths";
         }
     }

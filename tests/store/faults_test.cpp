@@ -390,12 +390,11 @@ TEST_CASE("store faults: a read-only lab file refuses writes with a clear error 
 }
 
 TEST_CASE("store faults: a lab file removed while open is not written to as if it were still there",
-          "[store][faults][removed][!shouldfail]")
+          "[store][faults][removed]")
 {
-    // Known problem (issue 10 note): in WAL mode SQLite goes on committing to the journal of a deleted file, so the
-    // save below reports success for records that no file at the path holds, and the journal it leaves beside the
-    // path is replayed into any non-empty file later put there. Remove [!shouldfail] once the store checks that its
-    // file is still in place (SQLITE_FCNTL_HAS_MOVED) before each write transaction.
+    // In WAL mode SQLite goes on committing to the journal of a deleted file, so a save used to report success for
+    // records that no file at the path holds, and the journal left beside the path was replayed into any non-empty
+    // file later put there. The store checks SQLITE_FCNTL_HAS_MOVED in every write transaction (sqlite.cpp).
     TempDir dir;
     const auto path = labWithOneLaser(dir, "removed.bwlab");
     const std::string earlierCopy = storetest::fileBytes(path); // e.g. last week's backup of the file
@@ -405,15 +404,68 @@ TEST_CASE("store faults: a lab file removed while open is not written to as if i
 
     auto saved = store->saveLaser(storetest::pulsedLaser("Saved after removal"));
     INFO((saved ? std::string("saved") : describe(saved.error())));
-    CHECK_FALSE(saved.has_value());
-    if (!saved)
-        CHECK(saved.error().field == kStorageField);
+    REQUIRE_FALSE(saved.has_value());
+    CHECK(saved.error().field == kStorageField);
+    CHECK_THAT(saved.error().value,
+               Contains("moved, removed or replaced while it was open") && Contains("nothing was saved"));
     store = LabStore::create(dir / "other.bwlab", storetest::sampleLab()).value(); // closes the first store
     // nothing is left at the path that could pass for a lab file or be replayed into one
     CHECK_FALSE(fs::exists(path));
     CHECK_FALSE(hasSidecars(path));
     // a copy restored to the path holds the copy's records only, not what was saved to the removed file
     storetest::writeBytes(path, earlierCopy);
+    CHECK(laserCount(path) == 1);
+}
+
+TEST_CASE("store faults: a lab file renamed while open refuses saves and keeps, under its new name, all it had",
+          "[store][faults][removed]")
+{
+    TempDir dir;
+    const auto path = labWithOneLaser(dir, "renamed.bwlab");
+    const auto renamed = dir / "renamed-later.bwlab";
+    {
+        auto store = LabStore::open(path);
+        REQUIRE(store.has_value());
+        // committed to the journal beside the old name, not yet checkpointed into the file
+        REQUIRE(store->saveLaser(storetest::pulsedLaser("Saved before the rename")).has_value());
+        fs::rename(path, renamed);
+        auto saved = store->saveLaser(storetest::pulsedLaser("Saved after the rename"));
+        REQUIRE_FALSE(saved.has_value());
+        CHECK(saved.error().field == kStorageField);
+    }
+    // closing put the journal into the renamed file and left nothing at the old name
+    CHECK_FALSE(fs::exists(path));
+    CHECK_FALSE(hasSidecars(path));
+    CHECK_FALSE(hasSidecars(renamed));
+    requireSound(renamed);
+    CHECK(laserCount(renamed) == 2);
+}
+
+TEST_CASE("store faults: a lab file replaced while open (a copy restored over it) is not written to",
+          "[store][faults][removed]")
+{
+    TempDir dir;
+    const auto path = labWithOneLaser(dir, "replaced.bwlab");
+    const auto copy = dir / "copy.bwlab";
+    fs::copy_file(path, copy);
+    auto store = LabStore::open(path);
+    REQUIRE(store.has_value());
+    // Another inode at the path, as a restore from a backup or a file manager's "replace" makes it.
+    fs::rename(copy, path);
+    const std::string restored = storetest::fileBytes(path);
+
+    auto saved = store->saveLaser(storetest::pulsedLaser("Saved after the replacement"));
+    INFO((saved ? std::string("saved") : describe(saved.error())));
+    REQUIRE_FALSE(saved.has_value());
+    CHECK(saved.error().field == kStorageField);
+    CHECK_THAT(saved.error().value, Contains("moved, removed or replaced while it was open"));
+    // reading still works: the open store shows what it had
+    auto lasers = store->lasers();
+    REQUIRE(lasers.has_value());
+    CHECK(lasers->size() == 1);
+    store = LabStore::create(dir / "other.bwlab", storetest::sampleLab()).value(); // closes the first store
+    CHECK(storetest::fileBytes(path) == restored);                                 // the restored file is untouched
+    requireSound(path);
     CHECK(laserCount(path) == 1);
 }
 

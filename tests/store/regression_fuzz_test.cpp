@@ -46,26 +46,32 @@ TEST_CASE("fuzz regression: every lab-file seed opens and reads, or is refused w
 
 TEST_CASE("fuzz finding: eyewear names differing only in bytes that are not UTF-8 export as one name, and the export "
           "no longer imports",
-          "[store][fuzz][!shouldfail]")
+          "[store][fuzz]")
 {
     // fuzz_eyewearcsv (promise: what the CSV import accepts, the lab export carries and reads back unchanged). The CSV
-    // import stores names as bytes; the export replaces what is not UTF-8 by U+FFFD (labexport.cpp), so "Goggle \xff"
-    // and "Goggle \xfe" both become "Goggle \uFFFD" and the lab's own export is refused as holding a duplicate name.
-    // Same path on the command line: lab import-eyewear, lab export, lab import exits 2.
+    // import stored names as bytes; the export replaces what is not UTF-8 by U+FFFD (labexport.cpp), so "Goggle \xff"
+    // and "Goggle \xfe" both became "Goggle \uFFFD" and the lab's own export was refused as holding a duplicate name.
+    // The record checks now refuse text that is not UTF-8 at every edge, naming the cell; nothing is written.
     storetest::TempDir dir;
     const auto lab = dir / "lab.bwlab";
-    auto store = LabStore::create(lab, storetest::sampleLab());
-    REQUIRE(store.has_value());
-    storetest::writeBytes(dir / "shelf.csv", "name\nGoggle \xff\nGoggle \xfe\n");
-    auto added = importEyewearCsv(*store, dir / "shelf.csv");
-    // Either the CSV import refuses text that is not UTF-8 (naming the cell), or the export keeps the names apart.
-    if (!added) {
-        CHECK(added.error().field.starts_with("row 1, column name"));
-        return;
+    {
+        auto store = LabStore::create(lab, storetest::sampleLab());
+        REQUIRE(store.has_value());
     }
-    REQUIRE(exportLab(*store, dir / "lab.bwlab.json").has_value());
-    auto reimported = importLab(dir / "lab.bwlab.json", dir / "again.bwlab");
-    INFO((reimported ? std::string("imported") : reimported.error().message()));
-    REQUIRE(reimported.has_value());
-    CHECK(reimported->eyewear()->size() == 2);
+    const std::string before = storetest::fileBytes(lab);
+    storetest::writeBytes(dir / "shelf.csv", "name\nGoggle \xff\nGoggle \xfe\n");
+    {
+        auto store = LabStore::open(lab);
+        REQUIRE(store.has_value());
+        auto added = importEyewearCsv(*store, dir / "shelf.csv");
+        REQUIRE_FALSE(added.has_value());
+        CHECK(added.error().field == "row 1, column name (line 2)");
+        CHECK(added.error().value == "Goggle \xff"); // the stored error keeps the bytes; message() shows U+FFFD
+        CHECK_THAT(added.error().message(), Catch::Matchers::Contains("'Goggle \xEF\xBF\xBD' is not accepted"));
+        CHECK_THAT(added.error().allowed, Catch::Matchers::Contains("UTF-8"));
+        auto shelf = store->eyewear();
+        REQUIRE(shelf.has_value());
+        CHECK(shelf->empty());
+    }
+    CHECK(storetest::fileBytes(lab) == before); // closed cleanly, the file is byte for byte as it was
 }

@@ -79,6 +79,9 @@ CaseEditor::CaseEditor(QWidget* parent) : QWidget(parent)
     m_magnification = numberField(1.0, 1000.0, this);
     m_objective = lengthField(this);
     m_transmission = numberField(0.0, 1.0, this);
+    // The ranges the record allows, marked while typing (model/ranges.hpp), not only when the lab file refuses.
+    checkAs(m_exposure, model::Quantity::Exposure, "exposure duration");
+    checkAs(m_distance, model::Quantity::Distance, "distance");
 
     auto* buttons = new QHBoxLayout;
     buttons->addWidget(m_add);

@@ -53,6 +53,7 @@ OutputEditor::OutputEditor(QWidget* parent) : QWidget(parent)
 {
     m_name = new QLineEdit(this);
     m_wavelength = wavelengthField(this);
+    m_wavelength->setObjectName(QStringLiteral("outputWavelength")); // names for tests and measurements
     m_wavelength->setPlaceholder(tr("e.g. 800 nm"));
     m_bandwidth = wavelengthField(this);
     m_bandwidth->setOptional(true);
@@ -69,6 +70,7 @@ OutputEditor::OutputEditor(QWidget* parent) : QWidget(parent)
     m_power->setOptional(true);
     m_power->setPlaceholder(tr("CW or mean power, e.g. 4 W"));
     m_energy = energyField(this);
+    m_energy->setObjectName(QStringLiteral("outputPulseEnergy"));
     m_energy->setOptional(true);
     m_energy->setPlaceholder(tr("per pulse, e.g. 4 mJ"));
     m_pulseDuration = durationField(this);
@@ -90,6 +92,15 @@ OutputEditor::OutputEditor(QWidget* parent) : QWidget(parent)
     m_divergence->setPlaceholder(tr("full angle, e.g. 0.5 mrad"));
     m_profile = new QComboBox(this);
     m_profile->addItems({tr("not declared"), tr("Gaussian"), tr("flat-top")});
+    // The ranges the record allows, marked while typing (model/ranges.hpp), not only when the lab file refuses.
+    checkAs(m_wavelength, model::Quantity::Wavelength, "wavelength");
+    checkAs(m_power, model::Quantity::AveragePower, "power");
+    checkAs(m_energy, model::Quantity::PulseEnergy, "pulse energy");
+    checkAs(m_pulseDuration, model::Quantity::PulseDuration, "pulse duration");
+    checkAs(m_prf, model::Quantity::Prf, "repetition rate");
+    checkAs(m_burstRate, model::Quantity::Prf, "burst rate");
+    checkAs(m_diameter, model::Quantity::BeamDiameter, "beam diameter");
+    checkAs(m_divergence, model::Quantity::Divergence, "divergence");
 
     auto* emission = new QGroupBox(tr("Emission"), this);
     auto* ef = new QFormLayout(emission);

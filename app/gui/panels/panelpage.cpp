@@ -60,7 +60,8 @@ PanelPage::PanelPage(Panel panel, QWidget* parent) : QWidget(parent), m_panel(pa
 
 void PanelPage::setBody(QWidget* body)
 {
-    m_layout->replaceWidget(m_body, body);
+    // replaceWidget() hands back the old widget's layout item, which the caller owns (found by LeakSanitizer).
+    delete m_layout->replaceWidget(m_body, body);
     delete m_body;
     m_body = body;
     m_layout->setStretchFactor(body, 1);

@@ -82,6 +82,13 @@ void QuantityField::reparse()
         m_error = m_optional ? QString() : tr("a value is needed here");
     } else {
         auto parsed = m_parse(text);
+        if (parsed && m_rangeCheck) {
+            if (auto inRange = m_rangeCheck(*parsed); !inRange) {
+                InputError error = inRange.error();
+                error.value = text.toStdString(); // quoted as typed, as a parse error is
+                parsed = std::unexpected(error);
+            }
+        }
         m_valid = parsed.has_value();
         m_error = m_valid ? QString() : fromStd(parsed.error().message());
         if (m_valid)
@@ -144,6 +151,12 @@ QuantityField* lengthField(QWidget* parent)
 QuantityField* angleField(QWidget* parent)
 {
     return makeField<units::Angle>(units::parseAngle, "angle", parent);
+}
+
+void checkAs(QuantityField* field, model::Quantity quantity, std::string_view name)
+{
+    field->setRangeCheck(
+        [quantity, label = std::string(name)](double si) { return model::checkRange(quantity, si, label); });
 }
 
 QuantityField* numberField(double lo, double hi, QWidget* parent)

@@ -10,7 +10,8 @@ struct InputError {
     std::string value;   // the offending text or number as the user gave it
     std::string allowed; // what would have been accepted, e.g. "180 nm to 1 mm"
 
-    // One line for a person: "wavelength: '5 kg' is not accepted; expected a length such as 800 nm".
+    // One line for a person: "wavelength: '5 kg' is not accepted; expected a length such as 800 nm". Bytes that
+    // are not UTF-8 and control characters show as U+FFFD (line breaks as spaces); a long value is cut with "…".
     [[nodiscard]] std::string message() const;
 };
 

@@ -316,6 +316,17 @@ template <typename Q, typename Number>
 [[nodiscard]] std::string format(Length value, int significant = 4);
 [[nodiscard]] std::string format(Area value, int significant = 4);
 
+// The fewest significant digits (1 to 17) with which `si` prints as a decimal that reads back as the same double.
+[[nodiscard]] int exactDigits(double si);
+
+// format() with every digit the value has: for quoting a value back in a refusal, where a rounded "1 mm" or
+// "30000 s" would read as inside the very range the message names.
+template <typename Q>
+[[nodiscard]] std::string formatExact(Q value)
+{
+    return format(value, exactDigits(value.si()));
+}
+
 // `value` in SI units of `unit`; the chosen prefix (f to P) is put in front of the whole unit text, so pass
 // "J/m²" but not "m²" (a prefix on a squared unit means something else).
 [[nodiscard]] std::string formatSi(double value, std::string_view unit, int significant = 4);

@@ -2,6 +2,7 @@
 
 #include "beamwarden/hazard/geometry.hpp"
 #include "beamwarden/limits/additivity.hpp"
+#include "beamwarden/limits/mpememo.hpp"
 
 #include <algorithm>
 #include <cmath>
@@ -66,6 +67,8 @@ std::string exposureVerdict(double ratio)
 Result<LaserAssessment> assessLaser(const model::Laser& laser, const std::vector<model::EyewearItem>& shelf,
                                     const AssessmentOptions& options)
 {
+    // Every exposure case of an output asks for the same limits again, and the skin for each case: remember them.
+    const limits::MpeMemo memo;
     LaserAssessment out;
     out.laser = laser;
     out.options = options;

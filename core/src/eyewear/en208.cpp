@@ -2,6 +2,7 @@
 #include "beamwarden/eyewear/en208.hpp"
 
 #include "beamwarden/hazard/geometry.hpp"
+#include "beamwarden/text.hpp"
 
 #include <algorithm>
 #include <cctype>
@@ -60,6 +61,9 @@ std::string scientific(double value)
 
 Result<En208Marking> parseEn208(std::string_view text)
 {
+    if (!text::isValidUtf8(text))
+        return fail(std::string(kField), std::string(text),
+                    "an EN 208 marking in UTF-8 text (this one holds bytes that are not UTF-8)");
     const std::vector<std::string> parts = split(text);
     if (parts.empty())
         return fail(std::string(kField), "", "an EN 208 marking such as '1 W 2x10^-4 J 532 RB3'");

@@ -5,7 +5,9 @@
 #include "beamwarden/limits/factors.hpp"
 
 #include <algorithm>
+#include <array>
 #include <cmath>
+#include <deque>
 #include <fmt/core.h>
 #include <numbers>
 
@@ -114,9 +116,21 @@ double levelValue(Mode mode, double lambda_nm, int n)
 
 int requiredLevelFor(Mode mode, double lambda_nm, double density)
 {
+    // The table's values for LB1 ... LB10 by mode and column, computed once (this runs for every spectral sample).
+    static const auto kTable = [] {
+        std::array<std::array<std::array<double, 10>, 3>, kModeCount> table{};
+        constexpr std::array<double, 3> kColumnWavelength{300.0, 1000.0, 2000.0}; // one inside each column
+        for (int m = 0; m < kModeCount; ++m)
+            for (std::size_t column = 0; column < 3; ++column)
+                for (int n = 1; n <= 10; ++n)
+                    table[static_cast<std::size_t>(m)][column][static_cast<std::size_t>(n - 1)] =
+                        levelValue(static_cast<Mode>(m), kColumnWavelength[column], n);
+        return table;
+    }();
+    const auto& values = kTable[static_cast<std::size_t>(mode)][static_cast<std::size_t>(columnFor(lambda_nm))];
     // A level's value is its maximum: a density equal to it (within rounding) still belongs to it.
     for (int n = 1; n <= 10; ++n) {
-        if (density <= levelValue(mode, lambda_nm, n) * (1.0 + 1e-12))
+        if (density <= values[static_cast<std::size_t>(n - 1)] * (1.0 + 1e-12))
             return n;
     }
     return kExceedsLb10;
@@ -171,37 +185,63 @@ Result<std::vector<LevelRequirement>> requiredLevels(const hazard::HazardRequest
                                              : point.powerFactor / (std::numbers::pi * d63 * d63 / 4.0);
     const double meanIrradiance = e.averagePower.si() * perWatt;
 
+    // The words behind each density are the same for every sample of a band (the density is the whole output's; Ti
+    // changes only at a few band edges), so each is written once, not once per sample.
+    const std::string meanBasis =
+        fmt::format("E = P/A63 = {} from the mean power", units::format(units::Irradiance::fromSi(meanIrradiance)));
+    std::string peakBasis;
+    // repetition() depends on the wavelength only through Ti and whether it lies below 400 nm.
+    struct RepetitionWords {
+        limits::RuleSetId set;
+        double ti;
+        bool below400;
+        Repetition repetition;
+        std::string basis;
+    };
+    std::deque<RepetitionWords> repetitions; // references stay valid as it grows
+    const double pulseH = e.pulseEnergy.si() * perWatt;
+    auto repetitionFor = [&](const limits::RuleSet& set, double lambda_nm) -> const RepetitionWords& {
+        const double ti = limits::factors::ti(set, lambda_nm);
+        const bool below400 = lambda_nm < 400.0;
+        for (const RepetitionWords& known : repetitions) {
+            if (known.set == set.id && known.ti == ti && known.below400 == below400)
+                return known;
+        }
+        Repetition rep = repetition(e, lambda_nm, ti, set.name);
+        std::string basis =
+            fmt::format("H = Q/A63 = {}; {}", units::format(units::RadiantExposure::fromSi(pulseH)), rep.basis);
+        repetitions.push_back(RepetitionWords{set.id, ti, below400, std::move(rep), std::move(basis)});
+        return repetitions.back();
+    };
+
     std::vector<LevelRequirement> out;
+    out.reserve(e.spectrum.samples.size());
     for (const model::SpectralSample& sample : e.spectrum.samples) {
         LevelRequirement req;
         req.lambda_nm = sample.wavelength.nanometres();
         // Damage is done by the whole beam: each wavelength of a band is held to the output's full density
         // (never to its share), so spreading a spectrum over samples cannot lower a level.
         const double eMean = meanIrradiance;
-        req.modes.push_back(ModeRequirement{
-            Mode::D, requiredLevelFor(Mode::D, req.lambda_nm, eMean), eMean,
-            fmt::format("E = P/A63 = {} from the mean power", units::format(units::Irradiance::fromSi(eMean)))});
+        req.modes.push_back(
+            ModeRequirement{Mode::D, requiredLevelFor(Mode::D, req.lambda_nm, eMean), eMean, meanBasis});
         if (e.pulsed) {
-            const double h = e.pulseEnergy.si() * perWatt;
+            const double h = pulseH;
             for (const Mode mode : pulsedModesFor(e.pulseDuration.seconds())) {
                 const bool peakPower = mode == Mode::M && columnFor(req.lambda_nm) != Column::VisibleNir;
                 if (peakPower) {
                     const double ep = h / e.pulseDuration.seconds();
-                    keepHigher(req.modes, ModeRequirement{mode, requiredLevelFor(mode, req.lambda_nm, ep), ep,
-                                                          fmt::format("peak power density E_p = Q/(t A63) = {}",
-                                                                      units::format(units::Irradiance::fromSi(ep)))});
+                    if (peakBasis.empty())
+                        peakBasis = fmt::format("peak power density E_p = Q/(t A63) = {}",
+                                                units::format(units::Irradiance::fromSi(ep)));
+                    keepHigher(req.modes,
+                               ModeRequirement{mode, requiredLevelFor(mode, req.lambda_nm, ep), ep, peakBasis});
                     continue;
                 }
                 for (const limits::RuleSetId id : setsOf(raw.rules)) {
-                    const limits::RuleSet& set = limits::ruleSet(id);
-                    const Repetition rep =
-                        repetition(e, req.lambda_nm, limits::factors::ti(set, req.lambda_nm), set.name);
-                    const double corrected = h * rep.groupSize * rep.correction;
-                    keepHigher(
-                        req.modes,
-                        ModeRequirement{mode, requiredLevelFor(mode, req.lambda_nm, corrected), corrected,
-                                        fmt::format("H = Q/A63 = {}; {}",
-                                                    units::format(units::RadiantExposure::fromSi(h)), rep.basis)});
+                    const RepetitionWords& rep = repetitionFor(limits::ruleSet(id), req.lambda_nm);
+                    const double corrected = h * rep.repetition.groupSize * rep.repetition.correction;
+                    keepHigher(req.modes, ModeRequirement{mode, requiredLevelFor(mode, req.lambda_nm, corrected),
+                                                          corrected, rep.basis});
                 }
             }
         }

@@ -4,7 +4,10 @@
 // level = ("LB" | "L") 1..10 ["Y"].
 #include "beamwarden/eyewear/marking.hpp"
 
+#include "beamwarden/text.hpp"
+
 #include <algorithm>
+#include <array>
 #include <cctype>
 #include <charconv>
 #include <cmath>
@@ -196,17 +199,13 @@ Result<MarkingTerm> parseTerm(const std::string& text, const std::vector<Wavelen
     return leveled;
 }
 
-// Plain decimals only: "{:g}" writes 1000000 nm as "1e+06", whose '+' would start a new term on reading.
+// The shortest plain decimal that reads back as the same double: "{:g}" wrote 1000000 nm as "1e+06", whose '+'
+// starts a new term on reading, and six fixed decimals printed 5320-5320.0000004 as the one wavelength 5320.
 std::string formatNumber(double nm)
 {
-    if (nm == std::floor(nm))
-        return fmt::format("{:.0f}", nm);
-    std::string text = fmt::format("{:.6f}", nm);
-    while (text.back() == '0')
-        text.pop_back();
-    if (text.back() == '.')
-        text.pop_back();
-    return text;
+    std::array<char, 400> buffer{}; // fixed notation of any finite double fits (at most 309 integer digits)
+    const auto [end, ec] = std::to_chars(buffer.data(), buffer.data() + buffer.size(), nm, std::chars_format::fixed);
+    return ec == std::errc{} ? std::string(buffer.data(), end) : fmt::format("{:f}", nm);
 }
 
 std::string formatWavelengths(const std::vector<WavelengthSpan>& spans)
@@ -237,6 +236,10 @@ bool MarkingTerm::covers(double lambda_nm) const
 
 Result<En207Marking> parseEn207(std::string_view text)
 {
+    // Other bytes would be taken for test-mode letters or numbers and refused with a reason that misleads.
+    if (!text::isValidUtf8(text))
+        return fail(std::string(kField), std::string(text),
+                    "an EN 207 marking in UTF-8 text (this one holds bytes that are not UTF-8)");
     const std::string line = normalise(trim(text));
     if (line.empty())
         return fail(std::string(kField), "", "an EN 207 marking such as '1064 D LB7 + I LB8'");

@@ -69,9 +69,10 @@ Result<std::vector<model::OdRow>> parseOdTable(std::string_view text, const std:
         double hi = 0.0;
         double value = 0.0;
         if (!number(from, lo) || !number(to, hi) || !number(od, value) || !extra.empty() || lo < 180.0 || hi > 1e6 ||
-            hi < lo || value < 0.0 || value > 20.0)
+            hi < lo || value < 0.0 || value > model::kMaxOpticalDensity)
             return fail(fmt::format("{} line {}", origin, lineNumber), line,
-                        "FROM-TO OD in nm, e.g. '740-1100 7' (180 nm to 1 mm, OD 0 to 20)");
+                        fmt::format("FROM-TO OD in nm, e.g. '740-1100 7' (180 nm to 1 mm, OD 0 to {})",
+                                    model::kMaxOpticalDensity));
         row.from = units::Wavelength::fromSi(lo * 1e-9);
         row.to = units::Wavelength::fromSi(hi * 1e-9);
         row.od = value;

@@ -1,7 +1,12 @@
 #include "beamwarden/eyewear/selection.hpp"
 
+#include "requirementindex.hpp"
+
 #include <algorithm>
 #include <fmt/core.h>
+#include <iterator>
+#include <map>
+#include <utility>
 
 namespace beamwarden::eyewear {
 
@@ -25,13 +30,77 @@ std::vector<std::string> namesOf(const ProtectionCheck& check)
     return names;
 }
 
+// Two items for different tasks must together cover every output and case. A shelf of thousands would give
+// millions of pairs, so items are grouped by what they cover, only groups that complete each other are paired, and
+// the kMaxPairs brightest pairs are kept (the others are counted in a note).
+constexpr std::size_t kMaxPairs = 10;
+
+void coveringPairs(const std::vector<ParsedEyewear>& shelf, Selection& selection)
+{
+    std::map<std::vector<bool>, std::vector<std::size_t>> groups; // what an item covers -> its items, shelf order
+    for (std::size_t i = 0; i < shelf.size(); ++i) {
+        std::vector<bool> covered = coveredOutputs(selection.checks[i]);
+        if (std::any_of(covered.begin(), covered.end(), [](bool v) { return v; }))
+            groups[std::move(covered)].push_back(i);
+    }
+    auto brighter = [&](std::size_t a, std::size_t b) {
+        return shelf[a].item.visibleTransmittance > shelf[b].item.visibleTransmittance;
+    };
+    std::map<std::vector<bool>, std::size_t> groupSize; // before trimming, to count every covering pair
+    for (auto& [covered, items] : groups) {
+        groupSize[covered] = items.size();
+        std::stable_sort(items.begin(), items.end(), brighter);
+        if (items.size() > kMaxPairs) // a pair with a dimmer item of a group is never brighter than these
+            items.resize(kMaxPairs);
+    }
+    std::vector<std::pair<std::size_t, std::size_t>> candidates;
+    std::size_t total = 0;
+    for (auto a = groups.begin(); a != groups.end(); ++a) {
+        for (auto b = std::next(a); b != groups.end(); ++b) {
+            bool all = true;
+            for (std::size_t k = 0; k < a->first.size(); ++k)
+                all = all && (a->first[k] || b->first[k]);
+            if (!all)
+                continue;
+            total += groupSize[a->first] * groupSize[b->first];
+            for (const std::size_t i : a->second) {
+                for (const std::size_t j : b->second)
+                    candidates.emplace_back(std::min(i, j), std::max(i, j));
+            }
+        }
+    }
+    auto pairLight = [&](const std::pair<std::size_t, std::size_t>& p) {
+        return std::min(shelf[p.first].item.visibleTransmittance, shelf[p.second].item.visibleTransmittance);
+    };
+    // Brightest first; among equals, in shelf order.
+    std::sort(candidates.begin(), candidates.end(), [&](const auto& x, const auto& y) {
+        const double lx = pairLight(x);
+        const double ly = pairLight(y);
+        return lx != ly ? lx > ly : x < y;
+    });
+    if (candidates.size() > kMaxPairs)
+        candidates.resize(kMaxPairs);
+    for (const auto& [i, j] : candidates)
+        selection.pairs.push_back(
+            Choice{{i, j}, pairLight({i, j}), {namesOf(selection.checks[i]), namesOf(selection.checks[j])}});
+    if (total > selection.pairs.size())
+        selection.notes.push_back(fmt::format("{} pairs of items cover every output together; the {} with the best "
+                                              "visible transmittance are listed.",
+                                              total, selection.pairs.size()));
+}
+
 } // namespace
 
 Selection leanestEyewear(const std::vector<ParsedEyewear>& shelf, const std::vector<OutputRequirement>& outputs)
 {
     Selection selection;
+    std::vector<detail::RequirementIndex> indices; // built once, shared by every item of the shelf
+    indices.reserve(outputs.size());
+    for (const OutputRequirement& requirement : outputs)
+        indices.emplace_back(requirement);
+    selection.checks.reserve(shelf.size());
     for (const ParsedEyewear& item : shelf)
-        selection.checks.push_back(checkAll(item, outputs));
+        selection.checks.push_back(detail::checkAll(item, outputs, indices));
 
     for (std::size_t i = 0; i < shelf.size(); ++i) {
         if (selection.checks[i].verdict == Verdict::Covers)
@@ -43,26 +112,8 @@ Selection leanestEyewear(const std::vector<ParsedEyewear>& shelf, const std::vec
     };
     std::stable_sort(selection.singles.begin(), selection.singles.end(), brighterFirst);
 
-    if (selection.singles.empty() && !outputs.empty()) {
-        // Two items for different tasks: together they must cover every output and case.
-        for (std::size_t i = 0; i < shelf.size(); ++i) {
-            const std::vector<bool> a = coveredOutputs(selection.checks[i]);
-            if (std::none_of(a.begin(), a.end(), [](bool v) { return v; }))
-                continue;
-            for (std::size_t j = i + 1; j < shelf.size(); ++j) {
-                const std::vector<bool> b = coveredOutputs(selection.checks[j]);
-                bool all = true;
-                for (std::size_t k = 0; k < a.size(); ++k)
-                    all = all && (a[k] || b[k]);
-                if (all)
-                    selection.pairs.push_back(
-                        Choice{{i, j},
-                               std::min(shelf[i].item.visibleTransmittance, shelf[j].item.visibleTransmittance),
-                               {namesOf(selection.checks[i]), namesOf(selection.checks[j])}});
-            }
-        }
-        std::stable_sort(selection.pairs.begin(), selection.pairs.end(), brighterFirst);
-    }
+    if (selection.singles.empty() && !outputs.empty())
+        coveringPairs(shelf, selection);
 
     if (selection.singles.empty() && selection.pairs.empty()) {
         for (const OutputRequirement& requirement : outputs) {

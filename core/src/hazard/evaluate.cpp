@@ -5,6 +5,7 @@
 #include "nohd.hpp"
 
 #include <algorithm>
+#include <array>
 #include <cmath>
 #include <fmt/core.h>
 
@@ -94,14 +95,22 @@ std::vector<RuleOd> odPerRule(const limits::MpeResult& mpe, double exposure)
 // (sum of ratio_j 10^-OD_j <= 1), even where the additivity table is not transitive.
 void requiredOdPerBand(HazardResult& result, const limits::AdditivityResult& sums)
 {
+    // The worst sum a sample takes part in depends only on its region: one pass per region keeps this linear.
+    constexpr std::size_t kRegions = 4;
+    std::vector<limits::SpectralRegion> regionOf(result.lines.size());
+    for (std::size_t i = 0; i < result.lines.size(); ++i)
+        regionOf[i] = limits::spectralRegion(result.lines[i].sample.wavelength);
+    std::array<double, kRegions> worstFor{};
+    for (std::size_t r = 0; r < kRegions; ++r) {
+        const auto region = static_cast<limits::SpectralRegion>(r);
+        for (std::size_t k = 0; k < result.lines.size(); ++k) {
+            if (limits::additive(limits::Target::Eye, region, regionOf[k]))
+                worstFor[r] = std::max(worstFor[r], sums.combinedRatio[k]);
+        }
+    }
     std::vector<double> od(result.lines.size(), 0.0);
     for (std::size_t i = 0; i < result.lines.size(); ++i) {
-        const auto ri = limits::spectralRegion(result.lines[i].sample.wavelength);
-        double worst = 0.0;
-        for (std::size_t k = 0; k < result.lines.size(); ++k) {
-            if (limits::additive(limits::Target::Eye, ri, limits::spectralRegion(result.lines[k].sample.wavelength)))
-                worst = std::max(worst, sums.combinedRatio[k]);
-        }
+        const double worst = worstFor[static_cast<std::size_t>(regionOf[i])];
         od[i] = worst > 1.0 ? std::log10(worst) : 0.0;
     }
     // Neighbouring samples of one band with the same requirement are reported as one band.
@@ -159,7 +168,7 @@ Result<HazardResult> evaluateHazard(const HazardRequest& raw)
     result.exposureUnit = e.pulsed ? "J/m2" : "W/m2";
     result.basis = chooseBasis(request);
     if (e.pulsed && result.basis.duration < e.pulseDuration)
-        return fail("exposure", units::format(result.basis.duration),
+        return fail("exposure", units::formatExact(result.basis.duration),
                     "an exposure duration at least as long as one pulse (" + units::format(e.pulseDuration) + ")");
 
     const double r = request.exposureCase.distance.si();

@@ -4,6 +4,8 @@
 #include "beamwarden/limits/additivity.hpp"
 #include "beamwarden/limits/report.hpp"
 
+#include <algorithm>
+#include <array>
 #include <cmath>
 #include <fmt/core.h>
 #include <functional>
@@ -37,20 +39,100 @@ HazardDistance finite(double value, std::string model)
     return d;
 }
 
-// The largest r at which ratio(r) > 1, for a ratio that does not grow with distance (bisection in log r).
+// The largest r at which ratio(r) > 1, for a ratio that does not grow with distance. Each ratio costs an MPE per
+// spectral sample, so the root is found by regula falsi in (ln r, ln ratio), where a ratio falling as r^-1 or r^-2 is
+// a straight line, with the Illinois safeguard against a stuck end and a bisection step whenever interpolation is
+// not possible; the bracket [lo, hi] always has ratio(lo) > 1 >= ratio(hi), and its upper end is returned, so the
+// radius is never short of the true one.
 HazardDistance solve(const std::function<double(double)>& ratio, std::string model)
 {
-    if (ratio(kFarthest_m) > 1.0)
+    const double atFarthest = ratio(kFarthest_m);
+    if (atFarthest > 1.0)
         return HazardDistance{DistanceKind::Unbounded, {}, {}, {}, {}, std::move(model)};
-    if (ratio(kNearest_m) <= 1.0)
+    const double atNearest = ratio(kNearest_m);
+    if (atNearest <= 1.0)
         return zero(std::move(model));
     double lo = std::log(kNearest_m);
     double hi = std::log(kFarthest_m);
+    double gLo = std::log(atNearest);  // > 0
+    double gHi = std::log(atFarthest); // <= 0, or -inf for a ratio of 0
+    int keptSide = 0;                  // +1: lo kept in the last step, -1: hi kept
     for (int i = 0; i < 200 && hi - lo > 1e-13; ++i) {
-        const double mid = 0.5 * (lo + hi);
-        (ratio(std::exp(mid)) > 1.0 ? lo : hi) = mid;
+        double mid = 0.5 * (lo + hi);
+        if (std::isfinite(gLo) && std::isfinite(gHi) && gLo > gHi) {
+            const double interpolated = lo + gLo * (hi - lo) / (gLo - gHi);
+            // Keep the trial strictly inside, so that every step shrinks the bracket.
+            const double margin = 1e-3 * (hi - lo);
+            mid = std::clamp(interpolated, lo + margin, hi - margin);
+        }
+        const double g = std::log(ratio(std::exp(mid)));
+        if (g > 0.0) {
+            lo = mid;
+            gLo = g;
+            if (keptSide == -1)
+                gHi *= 0.5; // Illinois: hi stayed twice; halve its value so the next trial moves towards it
+            keptSide = -1;
+        } else {
+            hi = mid;
+            gHi = g;
+            if (keptSide == +1)
+                gLo *= 0.5;
+            keptSide = +1;
+        }
     }
     return finite(std::exp(hi), std::move(model)); // the upper end: never short of the true distance
+}
+
+// The diffuse radius costs one MPE per spectral sample for every trial distance. Within a band, the samples' limits
+// change with the apparent source alike (through C6, T2, C5), so the root is first found with each sample's limit at
+// the point scaled as its region's strongest sample's limit scales, which costs one MPE per region and trial. That
+// guess is then checked with every sample's own limit just inside and just outside it; only if the check fails is
+// the root searched with every sample's limit at every trial. Either way the radius is bracketed by exact ratios.
+template <typename Ratio, typename LimitAt>
+HazardDistance solveDiffuse(const HazardResult& result, const Ratio& exactRatio, const LimitAt& limitAt,
+                            double quantity, const model::ExposureCase& c, const model::Beam& beam,
+                            const std::string& model)
+{
+    constexpr std::size_t kRegions = 4;
+    std::array<std::size_t, kRegions> strongest{};
+    std::array<bool, kRegions> present{};
+    std::vector<std::size_t> regionOf(result.lines.size());
+    for (std::size_t i = 0; i < result.lines.size(); ++i) {
+        const auto region = static_cast<std::size_t>(limits::spectralRegion(result.lines[i].sample.wavelength));
+        regionOf[i] = region;
+        if (!present[region] || result.lines[i].ratio > result.lines[strongest[region]].ratio)
+            strongest[region] = i;
+        present[region] = true;
+    }
+    auto guessRatio = [&](double r) {
+        const PointGeometry g = geometryAt(c, beam, r);
+        std::array<double, kRegions> scale{};
+        for (std::size_t region = 0; region < kRegions; ++region) {
+            if (present[region]) {
+                const LineResult& rep = result.lines[strongest[region]];
+                scale[region] = limitAt(rep, g.sourceAngle_rad) / rep.limit;
+            }
+        }
+        std::vector<limits::LineRatio> ratios;
+        ratios.reserve(result.lines.size());
+        for (std::size_t i = 0; i < result.lines.size(); ++i) {
+            const LineResult& line = result.lines[i];
+            ratios.push_back(limits::LineRatio{line.sample.wavelength, quantity * line.sample.powerFraction *
+                                                                           g.powerFactor * g.pointIrradiancePerWatt /
+                                                                           (line.limit * scale[regionOf[i]])});
+        }
+        return limits::combineLines(limits::Target::Eye, ratios).governingSum;
+    };
+    const HazardDistance guess = solve(guessRatio, model);
+    if (guess.kind == DistanceKind::Finite) {
+        const double r = guess.value.si();
+        const double outside = r * (1.0 + 1e-10);
+        const double inside = r * (1.0 - 1e-10);
+        if (exactRatio(outside) <= 1.0 && exactRatio(inside) > 1.0)
+            return finite(outside, model); // bracketed by exact ratios; the upper end, never short
+    }
+    // Zero and unbounded cost the exact solver two trials to confirm; a failed check, a full search.
+    return solve(exactRatio, model);
 }
 
 HazardDistance beamCase(double q, double a, double phi, double powerFactor)
@@ -127,8 +209,9 @@ HazardDistance hazardDistance(const HazardRequest& request, const HazardResult& 
                                                        g.pointIrradiancePerWatt / limitAt(line, g.sourceAngle_rad)});
             return limits::combineLines(limits::Target::Eye, ratios).governingSum;
         };
-        HazardDistance d = solve(ratio, "diffuse reflection, rho P cos(theta) / (pi r^2), with C6 from the lit "
-                                        "spot's apparent size");
+        const std::string model = "diffuse reflection, rho P cos(theta) / (pi r^2), with C6 from the lit spot's "
+                                  "apparent size";
+        HazardDistance d = solveDiffuse(result, ratio, limitAt, quantity, c, request.beam, model);
         // Beside it, the radius with the spot as a small source: each line's MPE at alpha = 0.
         std::vector<limits::LineRatio> smallShares;
         for (const LineResult& line : result.lines)

@@ -1,6 +1,7 @@
 // evaluateMpe: one rule set, or the strictest of all implemented sets (exposure-limits.md sections 4.8, 6.1).
 #include "beamwarden/limits/factors.hpp"
 #include "beamwarden/limits/mpe.hpp"
+#include "beamwarden/limits/mpememo.hpp"
 #include "pulsetrain.hpp"
 
 #include <algorithm>
@@ -24,24 +25,24 @@ RowStatus tiStatus(const RuleSet& set, double lambda_nm)
     return status;
 }
 
-Result<SetOutcome> evaluateSet(const RuleSet& set, const MpeRequest& request)
+// Fills `out` in place (a set's outcome is large; copying it was a good part of an evaluation's cost).
+Result<void> evaluateSet(const RuleSet& set, const MpeRequest& request, SetOutcome& out)
 {
-    SetOutcome out;
     out.set = set.id;
     out.c5 = request.c5;
-    out.single = evaluateLimits(set, request.target, request.wavelength, request.duration, request.sourceAngle,
-                                request.skinArea);
+    WavelengthFactors at(request.wavelength.nanometres());
+    out.single = evaluateLimits(set, request.target, at, request.duration, request.sourceAngle, request.skinArea);
     if (out.single.count == 0) // a gap in the table is a defect, never a silent zero
-        return fail("wavelength", units::format(request.wavelength),
+        return fail("wavelength", units::formatExact(request.wavelength),
                     "a wavelength and duration covered by a row of " + std::string(set.name));
     out.belowTable = out.single.governingTerm().belowTable;
 
     if (!request.train) {
         out.limit = out.single.value();
         out.weakestStatus = out.single.governingTerm().row->status;
-        return out;
+        return {};
     }
-    TrainOutcome train = evaluateTrain(set, request, request.c5);
+    const TrainOutcome& train = out.train.emplace(evaluateTrain(set, request, request.c5, at));
     const RuleOutcome& governing = train.governingRule == PulseRule::SinglePulse    ? train.singlePulse
                                    : train.governingRule == PulseRule::AveragePower ? train.average
                                                                                     : train.repeated;
@@ -51,26 +52,45 @@ Result<SetOutcome> evaluateSet(const RuleSet& set, const MpeRequest& request)
         out.weakestStatus = weaker(out.weakestStatus, tiStatus(set, request.wavelength.nanometres()));
     if (set.hasC5Options && governing.rule == PulseRule::PulseTrain && request.c5 == C5Option::Edition)
         out.weakestStatus = RowStatus::Reconstructed; // the C5 conditions are reconstructed (section 4.6)
-    out.train = train;
-    return out;
+    return {};
 }
+
+Result<MpeResult> evaluateAfresh(const MpeRequest& raw);
 
 } // namespace
 
-Result<MpeResult> evaluateMpe(const MpeRequest& raw)
+Result<MpeResult> evaluateMpe(const MpeRequest& request)
 {
-    auto checked = validate(raw);
-    if (!checked)
-        return std::unexpected(checked.error());
-    const MpeRequest& request = *checked;
+    MpeMemo* memo = MpeMemo::active();
+    if (memo == nullptr)
+        return evaluateAfresh(request);
+    if (const Result<MpeResult>* known = memo->find(request))
+        return *known;
+    Result<MpeResult> result = evaluateAfresh(request);
+    memo->remember(request, result);
+    return result;
+}
 
-    MpeResult result;
+namespace {
+
+Result<MpeResult> evaluateAfresh(const MpeRequest& raw)
+{
+    // Built in the returned object itself, which every path returns (so the compiler elides the copy): a result is
+    // a few kilobytes, and copying it was a fifth of the work of a single-exposure evaluation.
+    Result<MpeResult> out{std::in_place};
+    auto checked = validate(raw);
+    if (!checked) {
+        out = std::unexpected(checked.error());
+        return out;
+    }
+    const MpeRequest& request = *checked;
+    MpeResult& result = *out;
     result.request = request;
     auto add = [&](RuleSetId id) -> Result<void> {
-        auto outcome = evaluateSet(ruleSet(id), request);
+        auto outcome = evaluateSet(ruleSet(id), request, result.sets[result.setCount]);
         if (!outcome)
             return std::unexpected(outcome.error());
-        result.sets[result.setCount++] = *outcome;
+        ++result.setCount;
         return {};
     };
     Result<void> done;
@@ -87,8 +107,10 @@ Result<MpeResult> evaluateMpe(const MpeRequest& raw)
         done = add(RuleSetId::Iec60825_1_2014);
         break;
     }
-    if (!done)
-        return std::unexpected(done.error());
+    if (!done) {
+        out = std::unexpected(done.error());
+        return out;
+    }
 
     // The lowest limit governs; every figure is compared as the whole-source equivalent, so sets that measure an
     // extended source in different fields of view compare on the same exposure.
@@ -100,8 +122,10 @@ Result<MpeResult> evaluateMpe(const MpeRequest& raw)
     result.setsTie =
         result.setCount > 1 && std::all_of(result.sets.begin(), result.sets.begin() + result.setCount,
                                            [&](const SetOutcome& s) { return s.limit.si() <= lowest * (1.0 + 1e-9); });
-    return result;
+    return out;
 }
+
+} // namespace
 
 units::RadiantExposure MpeResult::perPulse() const
 {

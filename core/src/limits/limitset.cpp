@@ -1,6 +1,8 @@
 // Every limit that applies at one wavelength and duration under one rule set (exposure-limits.md section 6.1 item 2).
 #include "beamwarden/limits/factors.hpp"
 #include "beamwarden/limits/mpe.hpp"
+#include "rowindex.hpp"
+#include "wavelengthfactors.hpp"
 
 #include <algorithm>
 #include <cmath>
@@ -24,10 +26,11 @@ double apertureForRow(const LimitRow& row, Target target, double lambda_nm, doub
     return factors::apertureDiameter(target, inside, duration_s);
 }
 
-LimitTerm evaluateRow(const RuleSet& set, const LimitRow& row, double lambda_nm, double t, double alpha,
-                      double skinArea_m2, double alphaMaxOverride)
+// Writes into `term` (a slot of the result), so that a kept term is never copied.
+void evaluateRow(LimitTerm& term, const RuleSet& set, const LimitRow& row, WavelengthFactors& at, double t,
+                 double alpha, double skinArea_m2, double alphaMaxOverride)
 {
-    LimitTerm term;
+    term = LimitTerm{};
     term.row = &row;
     term.duration = units::Duration::fromSi(t);
     term.belowTable = t < kShortestTabulated_s;
@@ -36,24 +39,24 @@ LimitTerm evaluateRow(const RuleSet& set, const LimitRow& row, double lambda_nm,
     if ((row.factors & kC1) != 0)
         addFactor(term, Factor::C1, row.coefficient * std::pow(t, row.exponent));
     if ((row.factors & kC2) != 0) {
-        const double c2 = factors::c2(lambda_nm);
+        const double c2 = at.c2();
         factor *= c2;
         addFactor(term, Factor::C2, c2);
     }
     if ((row.factors & kT1) != 0)
-        addFactor(term, Factor::T1, factors::t1(lambda_nm));
+        addFactor(term, Factor::T1, at.t1());
     if ((row.factors & kC3) != 0) {
-        const double c3 = factors::c3(lambda_nm);
+        const double c3 = at.c3();
         factor *= c3;
         addFactor(term, Factor::C3, c3);
     }
     if ((row.factors & kC4) != 0) {
-        const double c4 = factors::c4(lambda_nm);
+        const double c4 = at.c4();
         factor *= c4;
         addFactor(term, Factor::C4, c4);
     }
     if ((row.factors & kC7) != 0) {
-        const double c7 = factors::c7(set.c7, lambda_nm);
+        const double c7 = at.c7(set.c7);
         factor *= c7;
         addFactor(term, Factor::C7, c7);
     }
@@ -100,8 +103,7 @@ LimitTerm evaluateRow(const RuleSet& set, const LimitRow& row, double lambda_nm,
             whole *= (alpha / gamma) * (alpha / gamma);
     }
     term.wholeSource = units::RadiantExposure::fromSi(whole);
-    term.aperture = units::Length::fromSi(apertureForRow(row, row.target, lambda_nm, t));
-    return term;
+    term.aperture = units::Length::fromSi(apertureForRow(row, row.target, at.lambda_nm, t));
 }
 
 bool rowApplies(const LimitRow& row, Target target, double lambda_nm, double t, bool extended, double skinArea_m2)
@@ -116,26 +118,29 @@ bool rowApplies(const LimitRow& row, Target target, double lambda_nm, double t, 
     return true;
 }
 
-// Keeps one term per effect: where rows of one effect meet at a breakpoint, the lower value holds.
-void keepLowerPerEffect(LimitSet& set, const LimitTerm& term)
+// Keeps one term per effect: where rows of one effect meet at a breakpoint, the lower value holds. The candidate was
+// evaluated into the first free slot (terms[count]) or, with all slots taken, into `spare`.
+void keepLowerPerEffect(LimitSet& set, LimitTerm& candidate)
 {
     for (std::uint8_t i = 0; i < set.count; ++i) {
-        if (set.terms[i].row->effect == term.row->effect) {
-            if (term.wholeSource < set.terms[i].wholeSource)
-                set.terms[i] = term;
+        if (set.terms[i].row->effect == candidate.row->effect) {
+            if (candidate.wholeSource < set.terms[i].wholeSource)
+                set.terms[i] = candidate;
             return;
         }
     }
     if (set.count < set.terms.size()) {
-        set.terms[set.count++] = term;
+        if (&candidate != &set.terms[set.count])
+            set.terms[set.count] = candidate;
+        ++set.count;
         return;
     }
     // Never drop a lower limit for want of room: replace the highest.
     auto highest = std::max_element(set.terms.begin(), set.terms.end(), [](const LimitTerm& a, const LimitTerm& b) {
         return a.wholeSource < b.wholeSource;
     });
-    if (term.wholeSource < highest->wholeSource)
-        *highest = term;
+    if (candidate.wholeSource < highest->wholeSource)
+        *highest = candidate;
 }
 
 } // namespace
@@ -143,16 +148,31 @@ void keepLowerPerEffect(LimitSet& set, const LimitTerm& term)
 LimitSet evaluateLimits(const RuleSet& set, Target target, units::Wavelength wavelength, units::Duration duration,
                         units::Angle sourceAngle, units::Area skinArea, double alphaMaxOverride_rad)
 {
-    const double lambda_nm = wavelength.nanometres();
+    WavelengthFactors at(wavelength.nanometres());
+    return evaluateLimits(set, target, at, duration, sourceAngle, skinArea, alphaMaxOverride_rad);
+}
+
+LimitSet evaluateLimits(const RuleSet& set, Target target, WavelengthFactors& at, units::Duration duration,
+                        units::Angle sourceAngle, units::Area skinArea, double alphaMaxOverride_rad)
+{
+    const double lambda_nm = at.lambda_nm;
     const double t = duration.seconds();
     const double alpha = sourceAngle.radians();
     const bool extended = alpha > factors::kAlphaMin_rad;
 
     LimitSet result;
-    for (const LimitRow& row : set.rows) {
-        if (rowApplies(row, target, lambda_nm, t, extended, skinArea.si()))
-            keepLowerPerEffect(result, evaluateRow(set, row, lambda_nm, t, alpha, skinArea.si(), alphaMaxOverride_rad));
+    LimitTerm spare;
+    for (const LimitRow* row : rowIndex(set).candidates(lambda_nm)) {
+        if (!rowApplies(*row, target, lambda_nm, t, extended, skinArea.si()))
+            continue;
+        LimitTerm& candidate = result.count < result.terms.size() ? result.terms[result.count] : spare;
+        evaluateRow(candidate, set, *row, at, t, alpha, skinArea.si(), alphaMaxOverride_rad);
+        keepLowerPerEffect(result, candidate);
     }
+    // A candidate that lost to a term of its own effect may still sit in the first free slot: clear it, so that the
+    // result carries only the terms it counts.
+    if (result.count < result.terms.size())
+        result.terms[result.count] = LimitTerm{};
     for (std::uint8_t i = 1; i < result.count; ++i) {
         if (result.terms[i].wholeSource < result.terms[result.governing].wholeSource)
             result.governing = i;

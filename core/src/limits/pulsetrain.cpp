@@ -67,7 +67,7 @@ bool rule3Applies(const RuleSet& set, const MpeRequest& request)
 
 } // namespace
 
-TrainOutcome evaluateTrain(const RuleSet& set, const MpeRequest& request, C5Option c5Option)
+TrainOutcome evaluateTrain(const RuleSet& set, const MpeRequest& request, C5Option c5Option, WavelengthFactors& at)
 {
     const PulseTrain& train = *request.train;
     TrainShape shape;
@@ -84,8 +84,8 @@ TrainOutcome evaluateTrain(const RuleSet& set, const MpeRequest& request, C5Opti
     const double lambda_nm = request.wavelength.nanometres();
     const double alpha = request.sourceAngle.radians();
     auto limitsAt = [&](double duration, double alphaMaxOverride = 0.0) {
-        return evaluateLimits(set, request.target, request.wavelength, units::Duration::fromSi(duration),
-                              request.sourceAngle, request.skinArea, alphaMaxOverride);
+        return evaluateLimits(set, request.target, at, units::Duration::fromSi(duration), request.sourceAngle,
+                              request.skinArea, alphaMaxOverride);
     };
 
     TrainOutcome out;

@@ -1,5 +1,7 @@
 #include "beamwarden/model/beam.hpp"
 
+#include "beamwarden/model/ranges.hpp"
+
 #include <cmath>
 #include <fmt/core.h>
 #include <numbers>
@@ -18,12 +20,10 @@ units::Angle Beam::divergence63() const
 
 Result<Beam> validate(const Beam& beam)
 {
-    const double d = beam.diameter.si();
-    if (!std::isfinite(d) || d <= 0.0 || d > 10.0)
-        return fail("beam-diameter", units::format(beam.diameter), "more than 0 m and at most 10 m");
-    const double phi = beam.divergence.si();
-    if (!std::isfinite(phi) || phi < 0.0 || phi > 3.2)
-        return fail("divergence", units::format(beam.divergence), "0 (collimated) up to pi rad, full angle");
+    if (auto inRange = checkRange(Quantity::BeamDiameter, beam.diameter.si(), "beam-diameter"); !inRange)
+        return std::unexpected(inRange.error());
+    if (auto inRange = checkRange(Quantity::Divergence, beam.divergence.si(), "divergence"); !inRange)
+        return std::unexpected(inRange.error());
     return beam;
 }
 

@@ -2,6 +2,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <fmt/core.h>
 #include <numeric>
 
 namespace beamwarden::model {
@@ -52,9 +53,9 @@ Spectrum singleLine(units::Wavelength wavelength)
 Result<Spectrum> gaussianBand(units::Wavelength centre, units::Wavelength fwhm, int samples)
 {
     if (!inRange(centre))
-        return fail("wavelength", units::format(centre), "180 nm to 1 mm");
+        return fail("wavelength", units::formatExact(centre), "180 nm to 1 mm");
     if (!std::isfinite(fwhm.si()) || fwhm.si() <= 0.0 || fwhm.si() > centre.si())
-        return fail("bandwidth", units::format(fwhm), "a full width at half maximum above 0 and below the centre");
+        return fail("bandwidth", units::formatExact(fwhm), "a full width at half maximum above 0 and below the centre");
     if (samples < 3 || samples % 2 == 0 || samples > 4097)
         return fail("samples", std::to_string(samples), "an odd number of samples from 3 to 4097");
     const double sigma = fwhm.si() / (2.0 * std::sqrt(2.0 * std::log(2.0)));
@@ -75,7 +76,7 @@ Result<Spectrum> gaussianBand(units::Wavelength centre, units::Wavelength fwhm, 
     for (SpectralSample& s : spectrum.samples)
         s.powerFraction /= total;
     if (!inRange(spectrum.shortest()) || !inRange(spectrum.longest()))
-        return fail("bandwidth", units::format(fwhm), "a band that stays within 180 nm to 1 mm (+-1.5 FWHM)");
+        return fail("bandwidth", units::formatExact(fwhm), "a band that stays within 180 nm to 1 mm (+-1.5 FWHM)");
     return spectrum;
 }
 
@@ -87,9 +88,10 @@ Result<Spectrum> lines(const std::vector<SpectralSample>& given)
     for (std::size_t i = 0; i < given.size(); ++i) {
         const SpectralSample& s = given[i];
         if (!inRange(s.wavelength))
-            return fail("lines[" + std::to_string(i) + "].wavelength", units::format(s.wavelength), "180 nm to 1 mm");
+            return fail("lines[" + std::to_string(i) + "].wavelength", units::formatExact(s.wavelength),
+                        "180 nm to 1 mm");
         if (!std::isfinite(s.powerFraction) || s.powerFraction <= 0.0)
-            return fail("lines[" + std::to_string(i) + "].share", std::to_string(s.powerFraction),
+            return fail("lines[" + std::to_string(i) + "].share", fmt::format("{}", s.powerFraction),
                         "a share of the power above 0");
         total += s.powerFraction;
     }

@@ -42,33 +42,46 @@ Result<std::vector<model::SignOff>> readSignOffs(Statement& select, RecordId ass
     return signOffs;
 }
 
-Result<std::optional<AssessmentStatus>> currentStatus(sqlite3* db, RecordId id)
+constexpr std::string_view kSelectStatus = "SELECT status FROM assessment WHERE id = ?1";
+constexpr std::string_view kLaserExists = "SELECT count(*) FROM laser WHERE id = ?1";
+constexpr std::string_view kInsertDraft = R"sql(
+        INSERT INTO assessment (id, laser_id, title, rule_set, program_version, author, created, updated, status,
+                                out_of_date, input_snapshot, results)
+        VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8, 'draft', 0, ?9, ?10))sql";
+constexpr std::string_view kInsertSignOff = R"sql(
+        INSERT INTO sign_off (assessment_id, who, signed_at, from_status, to_status, comment)
+        VALUES (?1, ?2, ?3, ?4, ?5, ?6))sql";
+constexpr std::string_view kMarkOutOfDate = "UPDATE assessment SET out_of_date = 1 WHERE id = ?1";
+
+// The helpers below take prepared statements, so that AssessmentInserter can prepare each once; every helper
+// leaves its statement reset for the next use.
+
+Result<std::optional<AssessmentStatus>> currentStatus(Statement& select, RecordId id)
 {
-    auto select = Statement::prepare(db, "SELECT status FROM assessment WHERE id = ?1");
-    if (!select)
-        return std::unexpected(select.error());
-    select->bind(1, id);
-    auto row = select->step();
+    select.bind(1, id);
+    auto row = select.step();
     if (!row)
         return std::unexpected(row.error());
-    if (!*row)
-        return std::optional<AssessmentStatus>{};
-    auto status = storedStatus(select->text(0));
-    if (!status)
-        return std::unexpected(status.error());
-    return std::optional<AssessmentStatus>{*status};
+    std::optional<AssessmentStatus> found;
+    if (*row) {
+        auto status = storedStatus(select.text(0));
+        if (!status)
+            return std::unexpected(status.error());
+        found = *status;
+    }
+    select.reset();
+    return found;
 }
 
-Result<void> requireLaser(sqlite3* db, RecordId laserId, std::string_view path)
+Result<void> requireLaser(Statement& select, RecordId laserId, std::string_view path)
 {
-    auto select = Statement::prepare(db, "SELECT count(*) FROM laser WHERE id = ?1");
-    if (!select)
-        return std::unexpected(select.error());
-    select->bind(1, laserId);
-    auto row = select->step();
+    select.bind(1, laserId);
+    auto row = select.step();
     if (!row)
         return std::unexpected(row.error());
-    if (select->integer(0) == 0)
+    const bool stored = *row && select.integer(0) > 0;
+    select.reset();
+    if (!stored)
         return fail(joinPath(path, "laser"), std::to_string(laserId), "the id of a stored laser");
     return {};
 }
@@ -78,21 +91,40 @@ std::string orNow(const std::string& time)
     return time.empty() ? utcNow() : time;
 }
 
-Result<RecordId> insertDraft(sqlite3* db, const model::Assessment& a, RecordId id, std::string_view path)
+Result<RecordId> insertDraft(sqlite3* db, Statement& insert, const model::Assessment& a, RecordId id,
+                             std::string_view path)
 {
-    auto insert = Statement::prepare(db, R"sql(
-        INSERT INTO assessment (id, laser_id, title, rule_set, program_version, author, created, updated, status,
-                                out_of_date, input_snapshot, results)
-        VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8, 'draft', 0, ?9, ?10))sql");
-    if (!insert)
-        return std::unexpected(insert.error());
     if (id != 0)
-        insert->bind(1, id);
+        insert.bind(1, id);
     else
-        insert->bindNull(1);
-    insert->bind(2, a.laserId).bind(3, a.title).bind(4, a.ruleSet).bind(5, a.programVersion).bind(6, a.author);
-    insert->bind(7, orNow(a.created)).bind(8, orNow(a.updated)).bind(9, a.inputSnapshot).bind(10, a.results);
-    if (auto done = insert->run(path.empty() ? "assessment" : path); !done)
+        insert.bindNull(1);
+    insert.bind(2, a.laserId).bind(3, a.title).bind(4, a.ruleSet).bind(5, a.programVersion).bind(6, a.author);
+    insert.bind(7, orNow(a.created)).bind(8, orNow(a.updated)).bind(9, a.inputSnapshot).bind(10, a.results);
+    if (auto done = insert.run(path.empty() ? "assessment" : path); !done)
+        return std::unexpected(done.error());
+    return lastInsertId(db);
+}
+
+Result<model::RecordId> insertSignOffWith(sqlite3* db, Statement& status, Statement& insert,
+                                          model::RecordId assessmentId, const model::SignOff& signOff,
+                                          std::string_view path)
+{
+    if (auto valid = validateSignOff(signOff, path); !valid)
+        return std::unexpected(valid.error());
+    auto stored = currentStatus(status, assessmentId);
+    if (!stored)
+        return std::unexpected(stored.error());
+    if (!*stored)
+        return fail("assessment", std::to_string(assessmentId), "the id of a stored assessment");
+    if (signOff.from != **stored)
+        return fail(joinPath(path, "from"), std::string(model::toString(signOff.from)),
+                    "the assessment's current status '" + std::string(model::toString(**stored)) + "'");
+    if (!model::isAllowedTransition(signOff.from, signOff.to))
+        return fail(joinPath(path, "to"), std::string(model::toString(signOff.to)),
+                    "an allowed move: draft -> in review -> approved, in review -> draft, or to withdrawn");
+    insert.bind(1, assessmentId).bind(2, signOff.who).bind(3, orNow(signOff.when));
+    insert.bind(4, model::toString(signOff.from)).bind(5, model::toString(signOff.to)).bind(6, signOff.comment);
+    if (auto done = insert.run(path.empty() ? "sign-off" : path); !done)
         return std::unexpected(done.error());
     return lastInsertId(db);
 }
@@ -154,15 +186,24 @@ Result<model::RecordId> saveAssessmentRow(sqlite3* db, const model::Assessment& 
 {
     if (auto valid = validateAssessment(a, path); !valid)
         return std::unexpected(valid.error());
-    if (auto laser = requireLaser(db, a.laserId, path); !laser)
+    auto laserExists = Statement::prepare(db, kLaserExists);
+    if (!laserExists)
+        return std::unexpected(laserExists.error());
+    if (auto laser = requireLaser(*laserExists, a.laserId, path); !laser)
         return std::unexpected(laser.error());
     if (a.id == 0) {
         if (a.status != AssessmentStatus::Draft)
             return fail(joinPath(path, "status"), std::string(model::toString(a.status)),
                         "draft for a new assessment; the status moves by sign-off");
-        return insertDraft(db, a, 0, path);
+        auto insert = Statement::prepare(db, kInsertDraft);
+        if (!insert)
+            return std::unexpected(insert.error());
+        return insertDraft(db, *insert, a, 0, path);
     }
-    auto stored = currentStatus(db, a.id);
+    auto select = Statement::prepare(db, kSelectStatus);
+    if (!select)
+        return std::unexpected(select.error());
+    auto stored = currentStatus(*select, a.id);
     if (!stored)
         return std::unexpected(stored.error());
     if (!*stored)
@@ -187,61 +228,66 @@ Result<model::RecordId> saveAssessmentRow(sqlite3* db, const model::Assessment& 
     return a.id;
 }
 
-Result<model::RecordId> insertAssessmentWithHistory(sqlite3* db, const model::Assessment& a, std::string_view path)
+Result<model::RecordId> insertSignOff(sqlite3* db, model::RecordId assessmentId, const model::SignOff& signOff,
+                                      std::string_view path)
+{
+    auto status = Statement::prepare(db, kSelectStatus);
+    auto insert = Statement::prepare(db, kInsertSignOff);
+    if (!status)
+        return std::unexpected(status.error());
+    if (!insert)
+        return std::unexpected(insert.error());
+    return insertSignOffWith(db, *status, *insert, assessmentId, signOff, path);
+}
+
+AssessmentInserter::AssessmentInserter(sqlite3* db, Statement laserExists, Statement status, Statement insert,
+                                       Statement signOff, Statement markOutOfDate)
+    : m_db(db), m_laserExists(std::move(laserExists)), m_status(std::move(status)), m_insert(std::move(insert)),
+      m_signOff(std::move(signOff)), m_markOutOfDate(std::move(markOutOfDate))
+{
+}
+
+Result<AssessmentInserter> AssessmentInserter::prepare(sqlite3* db)
+{
+    auto laserExists = Statement::prepare(db, kLaserExists);
+    auto status = Statement::prepare(db, kSelectStatus);
+    auto insert = Statement::prepare(db, kInsertDraft);
+    auto signOff = Statement::prepare(db, kInsertSignOff);
+    auto markOutOfDate = Statement::prepare(db, kMarkOutOfDate);
+    for (const auto* prepared : {&laserExists, &status, &insert, &signOff, &markOutOfDate}) {
+        if (!*prepared)
+            return std::unexpected(prepared->error());
+    }
+    return AssessmentInserter(db, std::move(*laserExists), std::move(*status), std::move(*insert), std::move(*signOff),
+                              std::move(*markOutOfDate));
+}
+
+Result<model::RecordId> AssessmentInserter::insertWithHistory(const model::Assessment& a, std::string_view path)
 {
     if (auto valid = validateAssessment(a, path); !valid)
         return std::unexpected(valid.error());
-    if (auto laser = requireLaser(db, a.laserId, path); !laser)
+    if (auto laser = requireLaser(m_laserExists, a.laserId, path); !laser)
         return std::unexpected(laser.error());
-    auto id = insertDraft(db, a, a.id, path);
+    auto id = insertDraft(m_db, m_insert, a, a.id, path);
     if (!id)
         return id;
     for (std::size_t i = 0; i < a.signOffs.size(); ++i) {
-        if (auto done = insertSignOff(db, *id, a.signOffs[i], indexPath(path, "sign_offs", i)); !done)
+        if (auto done =
+                insertSignOffWith(m_db, m_status, m_signOff, *id, a.signOffs[i], indexPath(path, "sign_offs", i));
+            !done)
             return std::unexpected(done.error());
     }
-    auto status = currentStatus(db, *id);
+    auto status = currentStatus(m_status, *id);
     if (!status)
         return std::unexpected(status.error());
     if (*status != a.status)
         return fail(joinPath(path, "status"), std::string(model::toString(a.status)),
                     "the status its last sign-off leaves ('" + std::string(model::toString(**status)) + "')");
     if (a.outOfDate) {
-        auto mark = Statement::prepare(db, "UPDATE assessment SET out_of_date = 1 WHERE id = ?1");
-        if (!mark)
-            return std::unexpected(mark.error());
-        if (auto done = mark->bind(1, *id).run(joinPath(path, "out_of_date")); !done)
+        if (auto done = m_markOutOfDate.bind(1, *id).run(joinPath(path, "out_of_date")); !done)
             return std::unexpected(done.error());
     }
     return id;
-}
-
-Result<model::RecordId> insertSignOff(sqlite3* db, model::RecordId assessmentId, const model::SignOff& signOff,
-                                      std::string_view path)
-{
-    if (auto valid = validateSignOff(signOff, path); !valid)
-        return std::unexpected(valid.error());
-    auto status = currentStatus(db, assessmentId);
-    if (!status)
-        return std::unexpected(status.error());
-    if (!*status)
-        return fail("assessment", std::to_string(assessmentId), "the id of a stored assessment");
-    if (signOff.from != **status)
-        return fail(joinPath(path, "from"), std::string(model::toString(signOff.from)),
-                    "the assessment's current status '" + std::string(model::toString(**status)) + "'");
-    if (!model::isAllowedTransition(signOff.from, signOff.to))
-        return fail(joinPath(path, "to"), std::string(model::toString(signOff.to)),
-                    "an allowed move: draft -> in review -> approved, in review -> draft, or to withdrawn");
-    auto insert = Statement::prepare(db, R"sql(
-        INSERT INTO sign_off (assessment_id, who, signed_at, from_status, to_status, comment)
-        VALUES (?1, ?2, ?3, ?4, ?5, ?6))sql");
-    if (!insert)
-        return std::unexpected(insert.error());
-    insert->bind(1, assessmentId).bind(2, signOff.who).bind(3, orNow(signOff.when));
-    insert->bind(4, model::toString(signOff.from)).bind(5, model::toString(signOff.to)).bind(6, signOff.comment);
-    if (auto done = insert->run(path.empty() ? "sign-off" : path); !done)
-        return std::unexpected(done.error());
-    return lastInsertId(db);
 }
 
 } // namespace beamwarden::store

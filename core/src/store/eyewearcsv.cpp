@@ -69,11 +69,13 @@ units::Wavelength fromNanometres(double nm)
 Result<std::vector<model::OdRow>> parseOdTable(std::string_view text, const std::string& cell)
 {
     std::vector<model::OdRow> rows;
-    constexpr std::string_view kAllowed = "bands in nm with an OD each, e.g. 740-1100:7;1100-1300:=5.2";
+    const std::string allowed =
+        fmt::format("bands in nm (180 to 1000000) with an OD (0 to {}) each, e.g. 740-1100:7;1100-1300:=5.2",
+                    model::kMaxOpticalDensity);
     for (const std::string& entry : splitList(text)) {
         const auto colon = entry.find(':');
         if (colon == std::string::npos)
-            return fail(cell, entry, std::string(kAllowed));
+            return fail(cell, entry, allowed);
         const std::string band = trimmed(std::string_view(entry).substr(0, colon));
         std::string od = trimmed(std::string_view(entry).substr(colon + 1));
         model::OdRow row;
@@ -85,8 +87,11 @@ Result<std::vector<model::OdRow>> parseOdTable(std::string_view text, const std:
         const auto from = parseNumber(band.substr(0, dash));
         const auto to = dash == std::string::npos ? from : parseNumber(band.substr(dash + 1));
         const auto value = parseNumber(od);
-        if (!from || !to || !value)
-            return fail(cell, entry, std::string(kAllowed));
+        // Ranges checked here in the cell's own units, so the refusal quotes the entry as written (in nm), not
+        // the record check's metres; written so that NaN fails too.
+        if (!from || !to || !value || !(*from >= 180.0 && *from <= *to && *to <= 1e6) ||
+            !(*value >= 0.0 && *value <= model::kMaxOpticalDensity))
+            return fail(cell, entry, allowed);
         row.from = fromNanometres(*from);
         row.to = fromNanometres(*to);
         row.od = *value;

@@ -74,9 +74,11 @@ Result<void> writeContents(sqlite3* db, const LabContents& contents)
         if (auto done = writeEyewear(db, contents.eyewear[i], true, indexPath("", "eyewear", i)); !done)
             return std::unexpected(done.error());
     }
+    auto assessments = AssessmentInserter::prepare(db);
+    if (!assessments)
+        return std::unexpected(assessments.error());
     for (std::size_t i = 0; i < contents.assessments.size(); ++i) {
-        if (auto done = insertAssessmentWithHistory(db, contents.assessments[i], indexPath("", "assessments", i));
-            !done)
+        if (auto done = assessments->insertWithHistory(contents.assessments[i], indexPath("", "assessments", i)); !done)
             return std::unexpected(done.error());
     }
     // The version goes in last: a file without it is refused as incomplete, should anything above be cut short.
@@ -87,10 +89,14 @@ Result<void> writeContents(sqlite3* db, const LabContents& contents)
 
 } // namespace
 
-LabStore::LabStore(sqlite3* db, std::filesystem::path path) : m_db(db), m_path(std::move(path)) {}
+LabStore::LabStore(sqlite3* db, std::filesystem::path path, bool historyChecked)
+    : m_db(db), m_path(std::move(path)), m_historyChecked(historyChecked)
+{
+}
 
 LabStore::LabStore(LabStore&& other) noexcept
-    : m_db(std::exchange(other.m_db, nullptr)), m_path(std::move(other.m_path))
+    : m_db(std::exchange(other.m_db, nullptr)), m_path(std::move(other.m_path)),
+      m_historyChecked(other.m_historyChecked)
 {
 }
 
@@ -100,6 +106,7 @@ LabStore& LabStore::operator=(LabStore&& other) noexcept
         closeHandle(m_db);
         m_db = std::exchange(other.m_db, nullptr);
         m_path = std::move(other.m_path);
+        m_historyChecked = other.m_historyChecked;
     }
     return *this;
 }
@@ -128,7 +135,7 @@ Result<LabStore> LabStore::create(const std::filesystem::path& path, const LabCo
         removeLabFile(path); // ours from the start, so nothing of anyone else's is lost
         return std::unexpected(written.error());
     }
-    return LabStore(connection->release(), path);
+    return LabStore(connection->release(), path, true); // written here: nothing in it to distrust
 }
 
 Result<LabStore> LabStore::open(const std::filesystem::path& path)
@@ -145,7 +152,18 @@ Result<LabStore> LabStore::open(const std::filesystem::path& path)
         return std::unexpected(connection.error());
     if (auto done = configure(connection->handle()); !done)
         return std::unexpected(done.error());
-    return LabStore(connection->release(), path);
+    // A migrated file was checked whole before the migration.
+    return LabStore(connection->release(), path, *version < kSchemaVersion);
+}
+
+Result<void> LabStore::requireSoundHistory()
+{
+    if (m_historyChecked)
+        return {};
+    if (auto sound = checkHistoryIntegrity(m_db, m_path); !sound)
+        return sound;
+    m_historyChecked = true;
+    return {};
 }
 
 Result<void> LabStore::backup(const std::filesystem::path& outPath)

@@ -70,11 +70,16 @@ Result<model::Laser> LabStore::laser(model::RecordId id)
 
 Result<model::RecordId> LabStore::saveLaser(const model::Laser& laser)
 {
+    // A laser's change marks its approved assessments out of date (triggers), so it writes into the history.
+    if (auto sound = requireSoundHistory(); !sound)
+        return std::unexpected(sound.error());
     return inTransaction(m_db, [&] { return writeLaser(m_db, laser, LaserWrite::Save, ""); });
 }
 
 Result<std::vector<model::RecordId>> LabStore::saveLasers(std::span<const model::Laser> lasers)
 {
+    if (auto sound = requireSoundHistory(); !sound)
+        return std::unexpected(sound.error());
     return inTransaction(m_db, [&]() -> Result<std::vector<model::RecordId>> {
         std::vector<model::RecordId> ids;
         for (std::size_t i = 0; i < lasers.size(); ++i) {
@@ -89,6 +94,8 @@ Result<std::vector<model::RecordId>> LabStore::saveLasers(std::span<const model:
 
 Result<void> LabStore::removeLaser(model::RecordId id)
 {
+    if (auto sound = requireSoundHistory(); !sound)
+        return sound;
     return inTransaction(m_db, [&] { return deleteLaser(m_db, id); });
 }
 
@@ -150,11 +157,15 @@ Result<model::Assessment> LabStore::assessment(model::RecordId id)
 
 Result<model::RecordId> LabStore::saveAssessment(const model::Assessment& assessment)
 {
+    if (auto sound = requireSoundHistory(); !sound)
+        return std::unexpected(sound.error());
     return inTransaction(m_db, [&] { return saveAssessmentRow(m_db, assessment, ""); });
 }
 
 Result<model::RecordId> LabStore::signOff(model::RecordId assessmentId, const model::SignOff& signOff)
 {
+    if (auto sound = requireSoundHistory(); !sound)
+        return std::unexpected(sound.error());
     return inTransaction(m_db, [&] { return insertSignOff(m_db, assessmentId, signOff, "sign_off"); });
 }
 

@@ -2,10 +2,13 @@
 
 #include "store/isotime.hpp"
 
+#include "beamwarden/text.hpp"
+
 #include <fmt/core.h>
 #include <nlohmann/json.hpp>
 
 #include <cmath>
+#include <initializer_list>
 #include <map>
 #include <set>
 
@@ -25,6 +28,8 @@ const std::map<std::string, std::string, std::less<>>& exportKeys()
         {"pulse-energy", "pulse_energy_J"},
         {"duration", "pulse_duration_s"},
         {"prf", "prf_Hz"},
+        {"burst-count", "burst.pulses_per_burst"},
+        {"burst-rate", "burst.burst_rate_Hz"},
         {"beam-diameter", "diameter_m"},
         {"divergence", "divergence_rad"},
         {"exposure", "exposure_s"},
@@ -46,10 +51,54 @@ std::unexpected<InputError> underPath(const InputError& error, std::string_view 
     return fail(joinPath(path, key != exportKeys().end() ? key->second : error.field), error.value, error.allowed);
 }
 
+// Names are what people pick records by and what the export tells duplicates apart by: UTF-8 (other bytes would
+// change on export, and two names could become one), one line, and short enough to show in a list or on a sheet.
+constexpr std::size_t kMaxNameCharacters = 200;
+// Free text (descriptions, notes, markings as printed): UTF-8, any number of lines, at most this much.
+constexpr std::size_t kMaxTextCharacters = 10000;
+
+Result<void> requireUtf8(const std::string& text, const std::string& at, std::string_view what)
+{
+    if (!text::isValidUtf8(text))
+        return fail(at, text, fmt::format("{} in UTF-8 (this one holds bytes that are not UTF-8)", what));
+    return {};
+}
+
 Result<void> requireName(const std::string& name, std::string_view path)
 {
+    const std::string at = joinPath(path, "name");
     if (name.find_first_not_of(" \t\r\n") == std::string::npos)
-        return fail(joinPath(path, "name"), name, "a name that is not empty");
+        return fail(at, name, "a name that is not empty");
+    if (auto utf8 = requireUtf8(name, at, "a name"); !utf8)
+        return utf8;
+    if (text::hasControlCharacter(name))
+        return fail(at, name, "a name on one line, without tabs or control characters");
+    if (const std::size_t count = text::characterCount(name); count > kMaxNameCharacters)
+        return fail(at, text::displayable(name, 40),
+                    fmt::format("a name of at most {} characters (this one has {})", kMaxNameCharacters, count));
+    return {};
+}
+
+// Optional free text: empty is fine.
+Result<void> requireText(const std::string& value, std::string_view path, std::string_view key)
+{
+    const std::string at = joinPath(path, key);
+    if (auto utf8 = requireUtf8(value, at, "text"); !utf8)
+        return utf8;
+    if (const std::size_t count = text::characterCount(value); count > kMaxTextCharacters)
+        return fail(at, text::displayable(value, 40),
+                    fmt::format("text of at most {} characters (this one has {})", kMaxTextCharacters, count));
+    return {};
+}
+
+// Several free-text fields of one record, checked in order.
+Result<void> requireTexts(std::initializer_list<std::pair<std::string_view, const std::string*>> fields,
+                          std::string_view path)
+{
+    for (const auto& [key, value] : fields) {
+        if (auto checked = requireText(*value, path, key); !checked)
+            return checked;
+    }
     return {};
 }
 
@@ -167,11 +216,15 @@ Result<void> validateLab(const model::Lab& lab, std::string_view path)
 {
     if (auto name = requireName(lab.name, path); !name)
         return name;
+    if (auto texts = requireTexts({{"lso_name", &lab.lsoName}, {"notes", &lab.notes}}, path); !texts)
+        return texts;
     std::set<std::string> names;
     for (std::size_t i = 0; i < lab.rooms.size(); ++i) {
         const std::string at = indexPath(path, "rooms", i);
         if (auto name = requireName(lab.rooms[i].name, at); !name)
             return name;
+        if (auto description = requireText(lab.rooms[i].description, at, "description"); !description)
+            return description;
         if (!names.insert(lab.rooms[i].name).second)
             return fail(joinPath(at, "name"), lab.rooms[i].name, "a name no other room has");
     }
@@ -182,6 +235,13 @@ Result<void> validateLaser(const model::Laser& laser, std::string_view path)
 {
     if (auto name = requireName(laser.name, path); !name)
         return name;
+    if (auto texts = requireTexts({{"maker_model", &laser.makerModel},
+                                   {"serial", &laser.serial},
+                                   {"room", &laser.room},
+                                   {"notes", &laser.notes}},
+                                  path);
+        !texts)
+        return texts;
     if (laser.outputs.empty())
         return fail(joinPath(path, "outputs"), "", "at least one output");
     std::set<std::string> names;
@@ -199,6 +259,10 @@ Result<void> validateEyewear(const model::EyewearItem& item, std::string_view pa
 {
     if (auto name = requireName(item.name, path); !name)
         return name;
+    if (auto texts = requireTexts(
+            {{"description", &item.description}, {"location", &item.location}, {"notes", &item.notes}}, path);
+        !texts)
+        return texts;
     for (std::size_t i = 0; i < item.spectralOd.size(); ++i) {
         const model::OdRow& row = item.spectralOd[i];
         const std::string at = indexPath(path, "spectral_od", i);
@@ -208,14 +272,17 @@ Result<void> validateEyewear(const model::EyewearItem& item, std::string_view pa
             return fail(joinPath(at, "to_m"), number(row.to.si()), "180e-9 m to 1e-3 m");
         if (row.to < row.from)
             return fail(joinPath(at, "to_m"), number(row.to.si()), "the end of the band, not below its start");
-        if (!std::isfinite(row.od) || row.od < 0.0)
-            return fail(joinPath(at, "od"), number(row.od), "an optical density of 0 or more");
+        if (!std::isfinite(row.od) || row.od < 0.0 || row.od > model::kMaxOpticalDensity)
+            return fail(joinPath(at, "od"), number(row.od),
+                        fmt::format("an optical density from 0 to {}", model::kMaxOpticalDensity));
     }
     for (const auto& [key, markings] :
          {std::pair{"en207", &item.en207Markings}, std::pair{"en208", &item.en208Markings}}) {
         for (std::size_t i = 0; i < markings->size(); ++i) {
             if ((*markings)[i].find_first_not_of(" \t") == std::string::npos)
                 return fail(indexPath(path, key, i), (*markings)[i], "a marking as printed, not empty");
+            if (auto utf8 = requireUtf8((*markings)[i], indexPath(path, key, i), "a marking"); !utf8)
+                return utf8;
         }
     }
     if (!std::isfinite(item.visibleTransmittance) || item.visibleTransmittance < 0.0 || item.visibleTransmittance > 1.0)

@@ -2,8 +2,12 @@
 
 #include "beamwarden/store/labstore.hpp"
 
+#include <fmt/core.h>
 #include <sqlite3.h>
 
+#include <filesystem>
+#include <string>
+#include <system_error>
 #include <utility>
 
 namespace beamwarden::store {
@@ -12,6 +16,22 @@ namespace {
 
 // Long enough for another Beamwarden window to finish a save; short enough that a stuck writer is reported.
 constexpr int kBusyTimeoutMs = 5000;
+
+// A lab file removed or replaced while open: in WAL mode SQLite goes on committing into the journal beside the old
+// path and reports success for records that no file at the path holds. SQLITE_FCNTL_HAS_MOVED compares the open
+// file with what the path names now (unix VFS: missing, or another inode).
+Result<void> requireFileInPlace(sqlite3* db)
+{
+    int moved = 0;
+    if (sqlite3_file_control(db, "main", SQLITE_FCNTL_HAS_MOVED, &moved) != SQLITE_OK || moved == 0)
+        return {};
+    const char* name = sqlite3_db_filename(db, "main");
+    return fail(std::string(kStorageField),
+                fmt::format("the lab file {} was moved, removed or replaced while it was open, so nothing was saved; "
+                            "open it again from where it is now (or save this lab elsewhere with Backup)",
+                            name != nullptr ? name : "(unnamed)"),
+                "");
+}
 
 } // namespace
 
@@ -187,7 +207,28 @@ Result<Connection> Connection::open(const std::filesystem::path& path, OpenMode 
 
 void closeHandle(sqlite3* db)
 {
+    if (db == nullptr)
+        return;
+    int moved = 0;
+    std::string path;
+    if (sqlite3_file_control(db, "main", SQLITE_FCNTL_HAS_MOVED, &moved) == SQLITE_OK && moved != 0) {
+        // SQLite does not checkpoint a moved file on close, so its journal would stay beside the path and be replayed
+        // into whatever file is put there next. Everything in it goes into the file it belongs to (still open here,
+        // wherever it is now), and the journal is emptied.
+        sqlite3_wal_checkpoint_v2(db, "main", SQLITE_CHECKPOINT_TRUNCATE, nullptr, nullptr);
+        if (const char* name = sqlite3_db_filename(db, "main"); name != nullptr)
+            path = name;
+    }
     sqlite3_close_v2(db);
+    // With no file at the path, the -wal and -shm left there belong to none; a file that comes later must not find
+    // them. With another file there, they may be that file's now, and stay.
+    if (!path.empty()) {
+        std::error_code error;
+        if (!std::filesystem::exists(path, error) && !error) {
+            std::filesystem::remove(path + "-wal", error);
+            std::filesystem::remove(path + "-shm", error);
+        }
+    }
 }
 
 Result<void> execute(sqlite3* db, std::string_view sql, std::string_view field)
@@ -234,7 +275,11 @@ Result<Transaction> Transaction::begin(sqlite3* db)
 {
     if (auto begun = execute(db, "BEGIN IMMEDIATE"); !begun)
         return std::unexpected(begun.error());
-    return Transaction(db);
+    Transaction transaction(db);
+    // Checked under the write lock, so the answer holds for this transaction; the destructor rolls back.
+    if (auto inPlace = requireFileInPlace(db); !inPlace)
+        return std::unexpected(inPlace.error());
+    return transaction;
 }
 
 Result<Transaction> Transaction::beginRead(sqlite3* db)
@@ -246,6 +291,9 @@ Result<Transaction> Transaction::beginRead(sqlite3* db)
 
 Result<void> Transaction::commit()
 {
+    // Again at the end: a removal during a long write (an import) must not commit into the old file's journal.
+    if (auto inPlace = requireFileInPlace(m_db); !inPlace)
+        return std::unexpected(inPlace.error());
     const int code = sqlite3_exec(m_db, "COMMIT", nullptr, nullptr, nullptr);
     if (code != SQLITE_OK) {
         // A failed COMMIT (e.g. a deferred foreign key) leaves the transaction open; the destructor rolls it back.

@@ -89,7 +89,9 @@ private:
 [[nodiscard]] std::int64_t lastInsertId(sqlite3* db);
 // Rows the last INSERT, UPDATE or DELETE changed.
 [[nodiscard]] int changedRows(sqlite3* db);
-// Closes a handle, deferring the close until any forgotten statement is finalised instead of failing.
+// Closes a handle, deferring the close until any forgotten statement is finalised instead of failing. A file moved,
+// removed or replaced while open gets its journal checkpointed into it first, and the -wal and -shm left at a path
+// where no file is any more are removed, so no later file there can replay them.
 void closeHandle(sqlite3* db);
 
 // BEGIN IMMEDIATE takes the write lock up front, so two writers queue on busy_timeout instead of one failing at

@@ -1,4 +1,5 @@
 #include <algorithm>
+#include <array>
 #include <charconv>
 #include <cmath>
 #include <string>
@@ -97,6 +98,22 @@ std::string render(double si, int significant, std::string_view plainUnit, Choos
 }
 
 } // namespace
+
+int exactDigits(double si)
+{
+    if (!std::isfinite(si) || si == 0.0)
+        return 1;
+    // to_chars without a precision writes the shortest form that reads back exactly: "1.0001e-03" has 5 digits.
+    std::array<char, 64> buffer{};
+    const auto [end, ec] =
+        std::to_chars(buffer.data(), buffer.data() + buffer.size(), std::fabs(si), std::chars_format::scientific);
+    if (ec != std::errc{})
+        return 17;
+    const std::string_view text(buffer.data(), static_cast<std::size_t>(end - buffer.data()));
+    const std::string_view mantissa = text.substr(0, text.find('e'));
+    const auto digits = static_cast<int>(mantissa.size()) - (mantissa.find('.') == std::string_view::npos ? 0 : 1);
+    return clampSignificant(digits);
+}
 
 std::string formatSi(double value, std::string_view unit, int significant)
 {

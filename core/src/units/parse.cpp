@@ -7,12 +7,16 @@
 
 #include <fmt/format.h>
 
+#include "beamwarden/text.hpp"
 #include "beamwarden/units.hpp"
 #include "units/unittext.hpp"
 
 namespace beamwarden::units {
 
 namespace {
+
+// A refusal quotes at most this much of the text: enough to recognise it, never a pasted page.
+constexpr std::size_t kShownBytes = 80;
 
 enum class Kind {
     Wavelength,
@@ -273,10 +277,10 @@ Result<double> parseSi(std::string_view text, std::string_view field, Kind kind)
     const KindText words = textFor(kind);
     const std::string name{field};
     const std::string_view trimmed = trim(text);
-    const std::string shown = internal::displayable(trimmed);
+    const std::string shown = beamwarden::text::displayable(trimmed, kShownBytes);
     const auto refuse = [&](std::string allowed) { return fail(name, shown, std::move(allowed)); };
 
-    if (!internal::isValidUtf8(text))
+    if (!beamwarden::text::isValidUtf8(text))
         return refuse(fmt::format("plain text (UTF-8), e.g. {}", words.example));
     if (trimmed.empty())
         return refuse(fmt::format("{} with its unit, e.g. {}", words.noun, words.example));

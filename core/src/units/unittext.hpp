@@ -7,11 +7,10 @@
 
 namespace beamwarden::units::internal {
 
-inline constexpr std::string_view kMicroSign = "\xC2\xB5";       // U+00B5, what we print
-inline constexpr std::string_view kGreekMu = "\xCE\xBC";         // U+03BC, what some keyboards type
-inline constexpr std::string_view kSuperscriptTwo = "\xC2\xB2";  // U+00B2
-inline constexpr std::string_view kDegreeSign = "\xC2\xB0";      // U+00B0
-inline constexpr std::string_view kReplacement = "\xEF\xBF\xBD"; // U+FFFD
+inline constexpr std::string_view kMicroSign = "\xC2\xB5";      // U+00B5, what we print
+inline constexpr std::string_view kGreekMu = "\xCE\xBC";        // U+03BC, what some keyboards type
+inline constexpr std::string_view kSuperscriptTwo = "\xC2\xB2"; // U+00B2
+inline constexpr std::string_view kDegreeSign = "\xC2\xB0";     // U+00B0
 
 struct SiPrefix {
     char letter;             // as typed; 'u' stands for µ
@@ -41,11 +40,5 @@ inline constexpr std::array<SiPrefix, 10> kPrefixes{{
 
 // value × 10^exponent, dividing for negative exponents so that exact decimal inputs round once.
 [[nodiscard]] double scaleByPowerOfTen(double value, int exponent);
-
-[[nodiscard]] bool isValidUtf8(std::string_view text);
-
-// Text that is safe to put in a message or a JSON file: invalid UTF-8 and control characters become U+FFFD
-// (tabs and line breaks a space), and anything longer than `maxBytes` is cut at a character boundary with "…".
-[[nodiscard]] std::string displayable(std::string_view text, std::size_t maxBytes = 80);
 
 } // namespace beamwarden::units::internal

@@ -1,6 +1,7 @@
 #pragma once
 // An output's emission: its spectrum and its time structure (CW, or pulses at a rate, optionally in bursts).
 #include "beamwarden/error.hpp"
+#include "beamwarden/model/ranges.hpp"
 #include "beamwarden/model/spectrum.hpp"
 #include "beamwarden/units.hpp"
 
@@ -27,7 +28,8 @@ struct Emission {
 };
 
 // Fills the missing one of average power and pulse energy from the other and the rate; refuses a pair that
-// disagrees by more than 1 %, zero or negative values, and a pulsed emission without duration or rate.
+// disagrees by more than 1 %, values outside their ranges (ranges.hpp) or a peak power above kMaxPeakPower_W, and a
+// pulsed emission without duration or rate.
 [[nodiscard]] Result<Emission> completeAndValidate(Emission emission);
 
 } // namespace beamwarden::model

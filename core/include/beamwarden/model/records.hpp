@@ -59,6 +59,10 @@ struct Laser {
     std::vector<Output> outputs;
 };
 
+// The largest OD a table may state: far beyond what any filter is rated or measured at (common practice: printed
+// tables stop near OD 10), so a larger figure is a slip such as 1e300, never a real filter.
+inline constexpr double kMaxOpticalDensity = 20.0;
+
 // One row of an eyewear item's spectral OD table: OD over [from, to]; makers print "at least" values.
 struct OdRow {
     units::Wavelength from;
@@ -74,7 +78,7 @@ struct EyewearItem {
     std::vector<OdRow> spectralOd;
     std::vector<std::string> en207Markings; // one per marked line, as printed, e.g. "740-1100 D LB7 + IR LB8"
     std::vector<std::string> en208Markings; // alignment eyewear, e.g. "1 W 2x10^-4 J 532 RB3"
-    double visibleTransmittance = 0; // 0..1, 0 = not known
+    double visibleTransmittance = 0;        // 0..1, 0 = not known
     int count = 1;
     std::string location;
     std::string lastInspection; // ISO 8601 date "YYYY-MM-DD", or empty

@@ -49,7 +49,9 @@ public:
     // removed again. Record ids in `contents` are kept when non-zero.
     [[nodiscard]] static Result<LabStore> create(const std::filesystem::path& path, const LabContents& contents);
     // Opens an existing lab file. Refuses, without writing to it, a file that is not SQLite, not a lab file, made by
-    // a newer Beamwarden or damaged. An older schema is copied to "<file>.v<N>.backup" and then migrated.
+    // a newer Beamwarden or damaged. An older schema is copied to "<file>.v<N>.backup" and then migrated. Damage in
+    // the history (assessments, sign-offs) is found before the first write that touches it, which is then refused:
+    // opening reads only the records, so its time does not grow with the years of history.
     [[nodiscard]] static Result<LabStore> open(const std::filesystem::path& path);
 
     LabStore(LabStore&& other) noexcept;
@@ -102,10 +104,14 @@ public:
     [[nodiscard]] Result<CheckReport> check();
 
 private:
-    LabStore(sqlite3* db, std::filesystem::path path);
+    LabStore(sqlite3* db, std::filesystem::path path, bool historyChecked);
+    // Opening checks every table but the history (assessments, sign-offs), whose size grows for years; this checks
+    // the history once, before the first write that can change it.
+    [[nodiscard]] Result<void> requireSoundHistory();
 
     sqlite3* m_db = nullptr;
     std::filesystem::path m_path;
+    bool m_historyChecked = false;
 };
 
 } // namespace beamwarden::store
