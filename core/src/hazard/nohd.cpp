@@ -2,6 +2,7 @@
 
 #include "beamwarden/hazard/geometry.hpp"
 #include "beamwarden/limits/additivity.hpp"
+#include "beamwarden/limits/mpememo.hpp"
 #include "beamwarden/limits/report.hpp"
 
 #include <algorithm>
@@ -211,7 +212,10 @@ HazardDistance hazardDistance(const HazardRequest& request, const HazardResult& 
         };
         const std::string model = "diffuse reflection, rho P cos(theta) / (pi r^2), with C6 from the lit spot's "
                                   "apparent size";
-        HazardDistance d = solveDiffuse(result, ratio, limitAt, quantity, c, request.beam, model);
+        HazardDistance d = [&] {
+            const limits::MpeMemo::Pause trialAnglesNeverReturn;
+            return solveDiffuse(result, ratio, limitAt, quantity, c, request.beam, model);
+        }();
         // Beside it, the radius with the spot as a small source: each line's MPE at alpha = 0.
         std::vector<limits::LineRatio> smallShares;
         for (const LineResult& line : result.lines)

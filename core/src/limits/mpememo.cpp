@@ -25,6 +25,16 @@ MpeMemo::~MpeMemo()
     t_active = m_previous;
 }
 
+MpeMemo::Pause::Pause() : m_paused(t_active)
+{
+    t_active = nullptr;
+}
+
+MpeMemo::Pause::~Pause()
+{
+    t_active = m_paused;
+}
+
 MpeMemo* MpeMemo::active()
 {
     return t_active;

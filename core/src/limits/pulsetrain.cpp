@@ -3,7 +3,9 @@
 #include "beamwarden/limits/factors.hpp"
 
 #include <algorithm>
+#include <array>
 #include <cmath>
+#include <optional>
 
 namespace beamwarden::limits {
 
@@ -83,9 +85,26 @@ TrainOutcome evaluateTrain(const RuleSet& set, const MpeRequest& request, C5Opti
 
     const double lambda_nm = request.wavelength.nanometres();
     const double alpha = request.sourceAngle.radians();
-    auto limitsAt = [&](double duration, double alphaMaxOverride = 0.0) {
-        return evaluateLimits(set, request.target, at, units::Duration::fromSi(duration), request.sourceAngle,
-                              request.skinArea, alphaMaxOverride);
+    // The rules ask for the limits at the same duration more than once (rule 3 at the pulse and at Ti, as rule 1
+    // does, where no alpha_max override applies): each distinct question is evaluated once.
+    struct Known {
+        double duration;
+        double alphaMaxOverride;
+        LimitSet limits;
+    };
+    std::array<std::optional<Known>, 6> known; // at most six distinct questions: t_p, Ti, T, the burst, rule 3 twice
+    auto limitsAt = [&](double duration, double alphaMaxOverride = 0.0) -> const LimitSet& {
+        std::size_t i = 0;
+        for (; i < known.size() && known[i]; ++i) {
+            if (known[i]->duration == duration && known[i]->alphaMaxOverride == alphaMaxOverride)
+                return known[i]->limits;
+        }
+        // Six slots hold every distinct question; should one more ever come, the last slot is reused for it.
+        std::optional<Known>& slot = known[std::min(i, known.size() - 1)];
+        slot.emplace(Known{duration, alphaMaxOverride,
+                           evaluateLimits(set, request.target, at, units::Duration::fromSi(duration),
+                                          request.sourceAngle, request.skinArea, alphaMaxOverride)});
+        return slot->limits;
     };
 
     TrainOutcome out;
@@ -104,11 +123,11 @@ TrainOutcome evaluateTrain(const RuleSet& set, const MpeRequest& request, C5Opti
     }
 
     // Rule 1: no single pulse (and no Ti group) above the MPE for its duration.
-    const LimitSet atPulse = limitsAt(shape.tp);
+    const LimitSet& atPulse = limitsAt(shape.tp);
     out.singlePulse =
         RuleOutcome{PulseRule::SinglePulse, true, atPulse.value(), atPulse.governingTerm(), 1, 1, 1, false, false};
     if (groupedReading) {
-        const LimitSet atTi = limitsAt(ti);
+        const LimitSet& atTi = limitsAt(ti);
         const units::RadiantExposure perPulse = atTi.value() / groupSize;
         if (perPulse < out.singlePulse.perPulse)
             out.singlePulse = RuleOutcome{
@@ -117,7 +136,7 @@ TrainOutcome evaluateTrain(const RuleSet& set, const MpeRequest& request, C5Opti
 
     // Rule 2: the train (and each burst) no more than the MPE for its duration.
     out.pulsesInExposure = shape.pulsesIn(shape.exposure);
-    const LimitSet atExposure = limitsAt(shape.exposure);
+    const LimitSet& atExposure = limitsAt(shape.exposure);
     out.average = RuleOutcome{PulseRule::AveragePower,
                               true,
                               atExposure.value() / out.pulsesInExposure,
@@ -128,7 +147,7 @@ TrainOutcome evaluateTrain(const RuleSet& set, const MpeRequest& request, C5Opti
                               false,
                               false};
     if (shape.isBurst && shape.pulsesPerBurst > 1) {
-        const LimitSet atBurst = limitsAt(shape.burstSpan);
+        const LimitSet& atBurst = limitsAt(shape.burstSpan);
         const units::RadiantExposure perPulse = atBurst.value() / shape.pulsesPerBurst;
         if (perPulse < out.average.perPulse)
             out.average = RuleOutcome{PulseRule::AveragePower,
@@ -153,7 +172,7 @@ TrainOutcome evaluateTrain(const RuleSet& set, const MpeRequest& request, C5Opti
         const double alphaMaxOverride = set.hasC5Options && conservative ? 0.1 : 0.0;
 
         auto consider = [&](double duration, double n, double perGroup) {
-            const LimitSet limits = limitsAt(duration, alphaMaxOverride);
+            const LimitSet& limits = limitsAt(duration, alphaMaxOverride);
             const LimitTerm thermal = lowestThermal(set, limits);
             if (thermal.row == nullptr)
                 return;

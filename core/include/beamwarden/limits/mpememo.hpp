@@ -24,6 +24,19 @@ public:
 
     [[nodiscard]] static MpeMemo* active();
 
+    // While a Pause lives, this thread's evaluations are neither looked up nor remembered: for searches whose
+    // requests never come back (trial source angles), so that they do not crowd out those that do.
+    class Pause {
+    public:
+        Pause();
+        ~Pause();
+        Pause(const Pause&) = delete;
+        Pause& operator=(const Pause&) = delete;
+
+    private:
+        MpeMemo* m_paused;
+    };
+
     [[nodiscard]] const Result<MpeResult>* find(const MpeRequest& request) const;
     void remember(const MpeRequest& request, const Result<MpeResult>& result);
 
