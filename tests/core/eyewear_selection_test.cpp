@@ -160,3 +160,27 @@ TEST_CASE("eyewear selection: nothing covers, the purchase markings are given", 
     CHECK(mentions1064);
     CHECK(mentions532);
 }
+
+TEST_CASE("eyewear selection: a large shelf lists the ten brightest pairs and counts the rest", "[eyewear][selection]")
+{
+    // 12 IR goggles x 12 green goggles: 144 pairs cover together (selection.cpp keeps kMaxPairs = 10).
+    std::vector<ParsedEyewear> shelf;
+    for (int i = 0; i < 12; ++i) {
+        shelf.push_back(item("IR goggle " + std::to_string(i), {"1064 D LB5"}, 0.30 + 0.01 * i));
+        shelf.push_back(item("green goggle " + std::to_string(i), {"532 D LB5"}, 0.50 + 0.01 * i));
+    }
+    const Selection s = leanestEyewear(shelf, laserOutputs());
+    CHECK(s.singles.empty());
+    REQUIRE(s.pairs.size() == 10);
+    // The brightest pair is limited by the brightest IR goggle (0.41), and the list runs brightest first.
+    CHECK(s.pairs.front().visibleTransmittance == Approx(0.41).epsilon(1e-12));
+    for (std::size_t k = 1; k < s.pairs.size(); ++k)
+        CHECK(s.pairs[k - 1].visibleTransmittance >= s.pairs[k].visibleTransmittance);
+    // Every listed pair is one IR and one green goggle.
+    for (const Choice& pair : s.pairs) {
+        REQUIRE(pair.items.size() == 2);
+        CHECK(shelf[pair.items[0]].item.name.substr(0, 2) != shelf[pair.items[1]].item.name.substr(0, 2));
+    }
+    REQUIRE_FALSE(s.notes.empty());
+    CHECK(s.notes.back().find("144 pairs") != std::string::npos);
+}

@@ -95,9 +95,11 @@ Selection leanestEyewear(const std::vector<ParsedEyewear>& shelf, const std::vec
 {
     Selection selection;
     std::vector<detail::RequirementIndex> indices; // built once, shared by every item of the shelf
-    indices.reserve(outputs.size());
-    for (const OutputRequirement& requirement : outputs)
-        indices.emplace_back(requirement);
+    if (!shelf.empty()) {
+        indices.reserve(outputs.size());
+        for (const OutputRequirement& requirement : outputs)
+            indices.emplace_back(requirement);
+    }
     selection.checks.reserve(shelf.size());
     for (const ParsedEyewear& item : shelf)
         selection.checks.push_back(detail::checkAll(item, outputs, indices));
