@@ -4,7 +4,7 @@
 <context>
     <name>Caution</name>
     <message>
-        <location filename="../app/gui/widgets/cautionstrip.cpp" line="13"/>
+        <location filename="../app/gui/widgets/cautionstrip.cpp" line="14"/>
         <source>Caution: these figures follow the published formula structure of the rule set named with them. They support, and never replace, the judgement of your institution&apos;s laser safety officer; local regulations and the manufacturer&apos;s data take precedence. Check every input before relying on a figure.</source>
         <translation>Vorsicht: Diese Werte folgen dem veröffentlichten Formelaufbau des jeweils genannten Regelwerks. Sie unterstützen das Urteil der oder des Laserschutzbeauftragten Ihrer Einrichtung und ersetzen es nie; örtliche Vorschriften und die Angaben des Herstellers haben Vorrang. Prüfen Sie jede Eingabe, bevor Sie sich auf einen Wert stützen.</translation>
     </message>
@@ -285,52 +285,57 @@
         <translation>MZB als H (J/m²)</translation>
     </message>
     <message>
-        <location filename="../app/gui/plots/odcurve.cpp" line="31"/>
+        <location filename="../app/gui/plots/odcurve.cpp" line="68"/>
         <source>Required and available optical density against wavelength</source>
         <translation>Erforderliche und vorhandene optische Dichte über der Wellenlänge</translation>
     </message>
     <message>
-        <location filename="../app/gui/plots/odcurve.cpp" line="62"/>
+        <location filename="../app/gui/plots/odcurve.cpp" line="99"/>
         <source>Required OD</source>
         <translation>Erforderliche OD</translation>
     </message>
     <message>
-        <location filename="../app/gui/plots/odcurve.cpp" line="71"/>
+        <location filename="../app/gui/plots/odcurve.cpp" line="108"/>
         <source>OD %1 required</source>
         <translation>OD %1 erforderlich</translation>
     </message>
     <message>
-        <location filename="../app/gui/plots/odcurve.cpp" line="71"/>
+        <location filename="../app/gui/plots/odcurve.cpp" line="108"/>
         <source>no OD required</source>
         <translation>keine OD erforderlich</translation>
     </message>
     <message>
-        <location filename="../app/gui/plots/odcurve.cpp" line="132"/>
+        <location filename="../app/gui/plots/odcurve.cpp" line="174"/>
         <source>%1 (%2)</source>
         <translation>%1 (%2)</translation>
     </message>
     <message>
-        <location filename="../app/gui/plots/odcurve.cpp" line="144"/>
+        <location filename="../app/gui/plots/odcurve.cpp" line="186"/>
         <source>The eyewear shelf is empty.</source>
         <translation>Der Schutzbrillenbestand ist leer.</translation>
     </message>
     <message>
-        <location filename="../app/gui/plots/odcurve.cpp" line="146"/>
+        <location filename="../app/gui/plots/odcurve.cpp" line="188"/>
         <source>No OD data from %1 to %2 nm: %3.</source>
         <translation>Keine OD-Daten von %1 bis %2 nm: %3.</translation>
     </message>
     <message>
-        <location filename="../app/gui/plots/odcurve.cpp" line="148"/>
+        <location filename="../app/gui/plots/odcurve.cpp" line="190"/>
         <source>Markings that could not be read: %1.</source>
         <translation>Nicht lesbare Kennzeichnungen: %1.</translation>
     </message>
     <message>
-        <location filename="../app/gui/plots/odcurve.cpp" line="150"/>
+        <location filename="../app/gui/plots/odcurve.cpp" line="193"/>
+        <source>%1 of the %2 shelf items shown, those that protect best first.</source>
+        <translation>%1 der %2 Schutzbrillen im Bestand gezeigt, die am besten schützenden zuerst.</translation>
+    </message>
+    <message>
+        <location filename="../app/gui/plots/odcurve.cpp" line="195"/>
         <source>Wavelength (nm)</source>
         <translation>Wellenlänge (nm)</translation>
     </message>
     <message>
-        <location filename="../app/gui/plots/odcurve.cpp" line="152"/>
+        <location filename="../app/gui/plots/odcurve.cpp" line="197"/>
         <source>Optical density</source>
         <translation>Optische Dichte</translation>
     </message>
@@ -422,7 +427,7 @@
     </message>
     <message>
         <location filename="../app/gui/startup.cpp" line="52"/>
-        <location filename="../app/gui/startup.cpp" line="63"/>
+        <location filename="../app/gui/startup.cpp" line="68"/>
         <source>Lab file to open.</source>
         <translation>Zu öffnende Labordatei.</translation>
     </message>
@@ -438,174 +443,197 @@
     </message>
 </context>
 <context>
-    <name>beamwarden::gui::AssessmentPanel</name>
+    <name>Verdict</name>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="40"/>
-        <source>OD %1 at %2</source>
-        <translation>OD %1 bei %2</translation>
-    </message>
-    <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="68"/>
         <source>covers</source>
         <translation>schützt</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="70"/>
         <source>cannot tell</source>
         <translation>nicht prüfbar</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="72"/>
+        <source>falls short</source>
+        <translation>reicht nicht</translation>
+    </message>
+</context>
+<context>
+    <name>beamwarden::gui::AssessmentPanel</name>
+    <message>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="46"/>
+        <source>OD %1 at %2</source>
+        <translation>OD %1 bei %2</translation>
+    </message>
+    <message>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="74"/>
+        <source>covers</source>
+        <translation>schützt</translation>
+    </message>
+    <message>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="76"/>
+        <source>cannot tell</source>
+        <translation>nicht prüfbar</translation>
+    </message>
+    <message>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="78"/>
         <source>falls short</source>
         <translation>reicht nicht</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="80"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="86"/>
         <source>within limit</source>
         <translation>innerhalb des Grenzwerts</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="83"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="89"/>
         <source>over limit %1</source>
         <translation>über dem Grenzwert %1</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="92"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="98"/>
         <source>0 m (below the MPE from the exit on)</source>
         <translation>0 m (ab Austritt unter der MZB)</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="94"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="100"/>
         <source>no finite distance</source>
         <translation>kein endlicher Abstand</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="103"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="109"/>
         <source>%1 per pulse</source>
         <translation>%1 je Impuls</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="121"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="139"/>
         <source>Output / exposure case</source>
         <translation>Ausgang / Expositionsfall</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="121"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="139"/>
         <source>MPE (eye)</source>
         <translation>MZB (Auge)</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="121"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="139"/>
         <source>Exposure</source>
         <translation>Exposition</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="121"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="139"/>
         <source>Eye</source>
         <translation>Auge</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="121"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="139"/>
         <source>Skin</source>
         <translation>Haut</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="122"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="140"/>
         <source>NOHD</source>
         <translation>NOHD</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="122"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="140"/>
         <source>Required OD</source>
         <translation>Erforderliche OD</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="131"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="146"/>
         <source>Eyewear</source>
         <translation>Schutzbrille</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="131"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="146"/>
         <source>Verdict</source>
         <translation>Urteil</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="131"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="146"/>
         <source>Margin (OD)</source>
         <translation>Reserve (OD)</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="136"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="161"/>
         <source>Select a result to see how it was formed.</source>
         <translation>Wählen Sie ein Ergebnis, um zu sehen, wie es zustande kommt.</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="159"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="184"/>
         <source>No laser selected</source>
         <translation>Kein Laser gewählt</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="170"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="197"/>
         <source>Not assessed: %1</source>
         <translation>Nicht bewertet: %1</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="188"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="225"/>
         <source>%1 — %2</source>
         <translation>%1 — %2</translation>
     </message>
+    <message numerus="yes">
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="239"/>
+        <source>%1 and %n more</source>
+        <translation>
+            <numerusform>%1 und %n weitere</numerusform>
+            <numerusform>%1 und %n weitere</numerusform>
+        </translation>
+    </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="195"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="240"/>
         <source>Covered by: %1.</source>
         <translation>Ausreichender Schutz durch: %1.</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="199"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="244"/>
         <source>No single item covers every output; together %1 and %2 do.</source>
         <translation>Keine einzelne Schutzbrille schützt vor jedem Ausgang; %1 und %2 zusammen schon.</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="204"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="249"/>
         <source>Nothing on the shelf covers this laser.</source>
         <translation>Keine Schutzbrille im Bestand schützt vor diesem Laser.</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="204"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="249"/>
         <source>A purchase needs, per output:</source>
         <translation>Eine Neuanschaffung braucht je Ausgang:</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="283"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="340"/>
         <source>How this figure was formed</source>
         <translation>Wie dieser Wert zustande kommt</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="285"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="342"/>
         <source>MPE %1 at %2 (%3), governed by %4.</source>
         <translation>MZB %1 bei %2 (%3), maßgeblich: %4.</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="287"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="344"/>
         <source>single exposure</source>
         <translation>Einzelexposition</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="288"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="345"/>
         <source>both rule sets (equal)</source>
         <translation>beide Regelwerke (gleich)</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="299"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="356"/>
         <source> per pulse</source>
         <translation> je Impuls</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="302"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="359"/>
         <source>Exposure and distance</source>
         <translation>Exposition und Abstand</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/assessmentpanel.cpp" line="305"/>
+        <location filename="../app/gui/panels/assessmentpanel.cpp" line="362"/>
         <source>NOHD model: %1</source>
         <translation>NOHD-Modell: %1</translation>
     </message>
@@ -663,132 +691,132 @@
         <translation>geringster Abstand; leer: am Austritt</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="88"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="91"/>
         <source>Case name</source>
         <translation>Name des Falls</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="89"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="92"/>
         <source>Viewing</source>
         <translation>Betrachtung</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="90"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="93"/>
         <source>Exposure duration</source>
         <translation>Expositionsdauer</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="91"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="94"/>
         <source>Distance</source>
         <translation>Abstand</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="92"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="95"/>
         <source>Focal length</source>
         <translation>Brennweite</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="93"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="96"/>
         <source>Numerical aperture</source>
         <translation>Numerische Apertur</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="94"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="97"/>
         <source>Reflectance</source>
         <translation>Reflexionsgrad</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="95"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="98"/>
         <source>Viewing angle</source>
         <translation>Betrachtungswinkel</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="96"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="99"/>
         <source>Magnification</source>
         <translation>Vergrößerung</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="97"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="100"/>
         <source>Objective diameter</source>
         <translation>Objektivdurchmesser</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="98"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="101"/>
         <source>Transmission</source>
         <translation>Transmission</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="107"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="110"/>
         <source>intrabeam at the exit</source>
         <translation>direkter Strahl am Austritt</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="108"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="111"/>
         <source>add exposure case</source>
         <translation>Expositionsfall hinzufügen</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="115"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="118"/>
         <source>remove exposure case</source>
         <translation>Expositionsfall entfernen</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="120"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="123"/>
         <source>case name</source>
         <translation>Name des Falls</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="127"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="130"/>
         <source>viewing</source>
         <translation>Betrachtung</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="140"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="143"/>
         <source>exposure duration</source>
         <translation>Expositionsdauer</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="142"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="145"/>
         <source>distance</source>
         <translation>Abstand</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="145"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="148"/>
         <source>focal length</source>
         <translation>Brennweite</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="148"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="151"/>
         <source>numerical aperture</source>
         <translation>Numerische Apertur</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="150"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="153"/>
         <source>reflectance</source>
         <translation>Reflexionsgrad</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="153"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="156"/>
         <source>viewing angle</source>
         <translation>Betrachtungswinkel</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="155"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="158"/>
         <source>magnification</source>
         <translation>Vergrößerung</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="159"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="162"/>
         <source>objective diameter</source>
         <translation>Objektivdurchmesser</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="161"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="164"/>
         <source>transmission</source>
         <translation>Transmission</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/caseeditor.cpp" line="175"/>
+        <location filename="../app/gui/panels/caseeditor.cpp" line="178"/>
         <source>(none: intrabeam at the exit is assumed)</source>
         <translation>(keiner: direkter Strahl am Austritt angenommen)</translation>
     </message>
@@ -824,7 +852,7 @@
 <context>
     <name>beamwarden::gui::ChartWidget</name>
     <message>
-        <location filename="../app/gui/plots/chartwidget.cpp" line="481"/>
+        <location filename="../app/gui/plots/chartwidget.cpp" line="478"/>
         <source>Chart exported from Beamwarden</source>
         <translation>Diagramm, exportiert aus Beamwarden</translation>
     </message>
@@ -832,300 +860,327 @@
 <context>
     <name>beamwarden::gui::EyewearPanel</name>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="68"/>
         <source>Item</source>
-        <translation>Schutzbrille</translation>
+        <translation type="vanished">Schutzbrille</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="68"/>
         <source>EN 207 / EN 208 markings</source>
-        <translation>EN 207 / EN 208</translation>
+        <translation type="vanished">EN 207 / EN 208</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="68"/>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="110"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="111"/>
         <source>Visible transmittance</source>
         <translation>Lichttransmission</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="68"/>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="111"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="112"/>
         <source>Count</source>
         <translation>Anzahl</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="68"/>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="112"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="113"/>
         <source>Location</source>
         <translation>Standort</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="76"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="77"/>
         <source>Add item</source>
         <translation>Brille hinzufügen</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="77"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="78"/>
         <source>Remove</source>
         <translation>Entfernen</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="82"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="83"/>
         <source>one marked line each, e.g. 740-1100 D LB7 + IR LB8</source>
         <translation>je Zeile eine Kennzeichnung, z. B. 740-1100 D LB7 + IR LB8</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="85"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="86"/>
         <source>alignment eyewear, e.g. 1 W 2x10^-4 J 632-640 RB3</source>
         <translation>Laserjustierbrille, z. B. 1 W 2x10^-4 J 632-640 RB3</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="88"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="89"/>
         <source>one row each: FROM-TO OD in nm, e.g. 740-1100 &gt;=7</source>
         <translation>je Zeile: VON-BIS OD in nm, z. B. 740-1100 &gt;=7</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="95"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="96"/>
         <source>0 to 1, e.g. 0.35</source>
         <translation>0 bis 1, z. B. 0.35</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="100"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="101"/>
         <source>YYYY-MM-DD</source>
         <translation>JJJJ-MM-TT</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="102"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="103"/>
         <source>Selected item</source>
         <translation>Gewählte Schutzbrille</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="104"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="105"/>
         <source>Name</source>
         <translation>Name</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="105"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="106"/>
         <source>Description</source>
         <translation>Beschreibung</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="106"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="107"/>
         <source>EN 207 markings</source>
         <translation>Kennzeichnung EN 207</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="107"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="108"/>
         <source>EN 208 markings</source>
         <translation>Kennzeichnung EN 208</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="108"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="109"/>
         <source>Spectral OD</source>
         <translation>Spektrale OD</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="113"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="114"/>
         <source>Last inspection</source>
         <translation>Letzte Prüfung</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="119"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="120"/>
         <source>Output / case</source>
         <translation>Ausgang / Fall</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="119"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="120"/>
         <source>Verdict</source>
         <translation>Urteil</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="119"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="120"/>
         <source>Required OD</source>
         <translation>Benötigte OD</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="119"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="120"/>
         <source>Provided OD</source>
         <translation>Vorhandene OD</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="120"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="121"/>
         <source>Against the selected laser</source>
         <translation>Für den gewählten Laser</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="153"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="154"/>
         <source>New eyewear %1</source>
         <translation>Neue Schutzbrille %1</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="173"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="174"/>
         <source>Last inspection: &apos;%1&apos; is not a date; expected YYYY-MM-DD</source>
         <translation>Letzte Prüfung: „%1“ ist kein Datum; erwartet wird JJJJ-MM-TT</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="177"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="178"/>
         <source>Edit %1</source>
         <translation>Bearbeiten: %1</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="180"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="181"/>
         <source>eyewear name</source>
         <translation>Name der Schutzbrille</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="181"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="182"/>
         <source>description</source>
         <translation>Beschreibung</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="182"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="183"/>
         <source>location</source>
         <translation>Standort</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="183"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="184"/>
         <source>inspection date</source>
         <translation>Prüfdatum</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="189"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="190"/>
         <source>Edit visible transmittance</source>
         <translation>Lichttransmission bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="198"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="199"/>
         <source>Edit count</source>
         <translation>Anzahl bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="243"/>
         <source>not known</source>
-        <translation>unbekannt</translation>
+        <translation type="vanished">unbekannt</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="290"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="273"/>
         <source>OD table</source>
         <translation>OD-Tabelle</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="306"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="289"/>
         <source>Edit markings and OD table</source>
         <translation>Kennzeichnung und OD-Tabelle bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="314"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="297"/>
         <source>Select a laser and an item to check one against the other.</source>
         <translation>Wählen Sie einen Laser und eine Schutzbrille, um beide gegeneinander zu prüfen.</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="318"/>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="325"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="301"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="308"/>
         <source>covers</source>
         <translation>schützt</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="319"/>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="326"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="302"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="309"/>
         <source>cannot tell</source>
         <translation>nicht prüfbar</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="320"/>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="327"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="303"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="310"/>
         <source>falls short</source>
         <translation>reicht nicht</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/eyewearpanel.cpp" line="321"/>
+        <location filename="../app/gui/panels/eyewearpanel.cpp" line="304"/>
         <source>%1 against %2: %3</source>
         <translation>%1 für %2: %3</translation>
     </message>
 </context>
 <context>
+    <name>beamwarden::gui::EyewearShelfModel</name>
+    <message>
+        <location filename="../app/gui/models/eyewearshelfmodel.cpp" line="58"/>
+        <source>not known</source>
+        <translation>unbekannt</translation>
+    </message>
+    <message>
+        <location filename="../app/gui/models/eyewearshelfmodel.cpp" line="75"/>
+        <source>Item</source>
+        <translation>Schutzbrille</translation>
+    </message>
+    <message>
+        <location filename="../app/gui/models/eyewearshelfmodel.cpp" line="77"/>
+        <source>EN 207 / EN 208 markings</source>
+        <translation>EN 207 / EN 208</translation>
+    </message>
+    <message>
+        <location filename="../app/gui/models/eyewearshelfmodel.cpp" line="79"/>
+        <source>Visible transmittance</source>
+        <translation>Lichttransmission</translation>
+    </message>
+    <message>
+        <location filename="../app/gui/models/eyewearshelfmodel.cpp" line="81"/>
+        <source>Count</source>
+        <translation>Anzahl</translation>
+    </message>
+    <message>
+        <location filename="../app/gui/models/eyewearshelfmodel.cpp" line="83"/>
+        <source>Location</source>
+        <translation>Standort</translation>
+    </message>
+</context>
+<context>
     <name>beamwarden::gui::HazardSheetPanel</name>
     <message>
-        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="36"/>
+        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="40"/>
         <source>Paper:</source>
         <translation>Papier:</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="37"/>
-        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="221"/>
+        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="41"/>
+        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="227"/>
         <source>A4</source>
         <translation>A4</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="38"/>
-        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="221"/>
+        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="42"/>
+        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="227"/>
         <source>US Letter</source>
         <translation>US Letter</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="58"/>
+        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="62"/>
         <source>Export PDF…</source>
         <translation>PDF exportieren…</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="60"/>
+        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="64"/>
         <source>Write the hazard sheet as a PDF file</source>
         <translation>Das Gefährdungsblatt als PDF-Datei schreiben</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="62"/>
+        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="66"/>
         <source>Print…</source>
         <translation>Drucken…</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="64"/>
+        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="68"/>
         <source>Print the hazard sheet</source>
         <translation>Das Gefährdungsblatt drucken</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="97"/>
+        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="102"/>
         <source>Select a laser to preview its hazard sheet.</source>
         <translation>Wählen Sie einen Laser, um sein Gefährdungsblatt anzuzeigen.</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="149"/>
+        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="154"/>
         <source>No hazard sheet to export: select a laser first.</source>
         <translation>Kein Gefährdungsblatt zum Exportieren: Wählen Sie zuerst einen Laser.</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="154"/>
+        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="159"/>
         <source>Could not write %1: %2</source>
         <translation>%1 konnte nicht geschrieben werden: %2</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="170"/>
         <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="175"/>
+        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="180"/>
         <source>Print hazard sheet</source>
         <translation>Gefährdungsblatt drucken</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="175"/>
+        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="180"/>
         <source>The printer could not be started.</source>
         <translation>Der Drucker konnte nicht gestartet werden.</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="197"/>
-        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="201"/>
+        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="202"/>
+        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="206"/>
         <source>Export hazard sheet</source>
         <translation>Gefährdungsblatt exportieren</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="197"/>
+        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="202"/>
         <source>PDF files (*.pdf)</source>
         <translation>PDF-Dateien (*.pdf)</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="221"/>
+        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="227"/>
         <source>%1 page(s), %2</source>
         <translation>%1 Seite(n), %2</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="237"/>
+        <location filename="../app/gui/panels/hazardsheetpanel.cpp" line="248"/>
         <source>Page %1 of %2</source>
         <translation>Seite %1 von %2</translation>
     </message>
@@ -1584,251 +1639,251 @@
         <translation>Nicht geöffnet: %1</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="275"/>
+        <location filename="../app/gui/mainwindow.cpp" line="277"/>
         <source>Not stored: %1</source>
         <translation>Nicht gespeichert: %1</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="372"/>
+        <location filename="../app/gui/mainwindow.cpp" line="375"/>
         <source>&amp;File</source>
         <translation>&amp;Datei</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="373"/>
+        <location filename="../app/gui/mainwindow.cpp" line="376"/>
         <source>&amp;New lab…</source>
         <translation>&amp;Neues Labor…</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="374"/>
+        <location filename="../app/gui/mainwindow.cpp" line="377"/>
         <source>&amp;Open…</source>
         <translation>Ö&amp;ffnen…</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="376"/>
+        <location filename="../app/gui/mainwindow.cpp" line="379"/>
         <source>Open &amp;demo lab</source>
         <translation>&amp;Demo-Labor öffnen</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="378"/>
+        <location filename="../app/gui/mainwindow.cpp" line="381"/>
         <source>Demo lab</source>
         <translation>Demo-Labor</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="380"/>
+        <location filename="../app/gui/mainwindow.cpp" line="383"/>
         <source>Open &amp;recent</source>
         <translation>&amp;Zuletzt geöffnet</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="383"/>
+        <location filename="../app/gui/mainwindow.cpp" line="386"/>
         <source>&amp;Import lab export…</source>
         <translation>Labor-Export &amp;importieren…</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="384"/>
+        <location filename="../app/gui/mainwindow.cpp" line="387"/>
         <source>&amp;Export lab…</source>
         <translation>Labor &amp;exportieren…</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="385"/>
+        <location filename="../app/gui/mainwindow.cpp" line="388"/>
         <source>Import eyewear &amp;CSV…</source>
         <translation>Schutzbrillen aus &amp;CSV importieren…</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="386"/>
+        <location filename="../app/gui/mainwindow.cpp" line="389"/>
         <source>&amp;Backup…</source>
         <translation>&amp;Sicherungskopie…</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="388"/>
+        <location filename="../app/gui/mainwindow.cpp" line="391"/>
         <source>&amp;Quit</source>
         <translation>&amp;Beenden</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="391"/>
+        <location filename="../app/gui/mainwindow.cpp" line="394"/>
         <source>&amp;Edit</source>
         <translation>&amp;Bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="392"/>
+        <location filename="../app/gui/mainwindow.cpp" line="395"/>
         <source>&amp;Undo</source>
         <translation>&amp;Rückgängig</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="397"/>
+        <location filename="../app/gui/mainwindow.cpp" line="400"/>
         <source>&amp;Redo</source>
         <translation>&amp;Wiederholen</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="403"/>
+        <location filename="../app/gui/mainwindow.cpp" line="406"/>
         <source>&amp;View</source>
         <translation>&amp;Ansicht</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="410"/>
+        <location filename="../app/gui/mainwindow.cpp" line="413"/>
         <source>&amp;Settings</source>
         <translation>&amp;Einstellungen</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="411"/>
+        <location filename="../app/gui/mainwindow.cpp" line="414"/>
         <source>Rule set</source>
         <translation>Regelwerk</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="414"/>
+        <location filename="../app/gui/mainwindow.cpp" line="417"/>
         <source>Strictest of IEC 60825-1:2014 and :2007 (default)</source>
         <translation>Strengster Wert aus IEC 60825-1:2014 und :2007 (Standard)</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="415"/>
+        <location filename="../app/gui/mainwindow.cpp" line="418"/>
         <source>IEC 60825-1:2014 only</source>
         <translation>Nur IEC 60825-1:2014</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="416"/>
+        <location filename="../app/gui/mainwindow.cpp" line="419"/>
         <source>IEC 60825-1:2007 only (EU workplace basis)</source>
         <translation>Nur IEC 60825-1:2007 (Basis des EU-Arbeitsschutzes)</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="428"/>
+        <location filename="../app/gui/mainwindow.cpp" line="431"/>
         <source>2014 repeated-pulse factor C5</source>
         <translation>Pulsfolgefaktor C5 (2014)</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="431"/>
+        <location filename="../app/gui/mainwindow.cpp" line="434"/>
         <source>Conservative, N^-0.25 (default)</source>
         <translation>Konservativ, N^-0.25 (Standard)</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="432"/>
+        <location filename="../app/gui/mainwindow.cpp" line="435"/>
         <source>Candidate edition reading (reconstructed)</source>
         <translation>Mögliche Lesart der Ausgabe (rekonstruiert)</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="444"/>
+        <location filename="../app/gui/mainwindow.cpp" line="447"/>
         <source>Language</source>
         <translation>Sprache</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="446"/>
+        <location filename="../app/gui/mainwindow.cpp" line="449"/>
         <source>System default</source>
         <translation>Systemvorgabe</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="450"/>
+        <location filename="../app/gui/mainwindow.cpp" line="453"/>
         <source>The language changes at the next start.</source>
         <translation>Die Sprache wechselt beim nächsten Start.</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="453"/>
+        <location filename="../app/gui/mainwindow.cpp" line="456"/>
         <source>&amp;Help</source>
         <translation>&amp;Hilfe</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="454"/>
+        <location filename="../app/gui/mainwindow.cpp" line="457"/>
         <source>&amp;About Beamwarden</source>
         <translation>&amp;Über Beamwarden</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="474"/>
+        <location filename="../app/gui/mainwindow.cpp" line="477"/>
         <source>Rule set: IEC 60825-1:2014</source>
         <translation>Regelwerk: IEC 60825-1:2014</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="477"/>
+        <location filename="../app/gui/mainwindow.cpp" line="480"/>
         <source>Rule set: IEC 60825-1:2007</source>
         <translation>Regelwerk: IEC 60825-1:2007</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="481"/>
+        <location filename="../app/gui/mainwindow.cpp" line="484"/>
         <source> (C5: edition reading)</source>
         <translation> (C5: Lesart der Ausgabe)</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="488"/>
+        <location filename="../app/gui/mainwindow.cpp" line="491"/>
         <source>Open lab file</source>
         <translation>Labordatei öffnen</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="488"/>
+        <location filename="../app/gui/mainwindow.cpp" line="491"/>
         <source>Lab files (*.bwlab);;All files (*)</source>
         <translation>Labordateien (*.bwlab);;Alle Dateien (*)</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="495"/>
+        <location filename="../app/gui/mainwindow.cpp" line="498"/>
         <source>New lab file</source>
         <translation>Neue Labordatei</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="495"/>
-        <location filename="../app/gui/mainwindow.cpp" line="515"/>
-        <location filename="../app/gui/mainwindow.cpp" line="566"/>
+        <location filename="../app/gui/mainwindow.cpp" line="498"/>
+        <location filename="../app/gui/mainwindow.cpp" line="518"/>
+        <location filename="../app/gui/mainwindow.cpp" line="569"/>
         <source>Lab files (*.bwlab)</source>
         <translation>Labordateien (*.bwlab)</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="502"/>
+        <location filename="../app/gui/mainwindow.cpp" line="505"/>
         <source>New lab</source>
         <translation>Neues Labor</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="511"/>
+        <location filename="../app/gui/mainwindow.cpp" line="514"/>
         <source>Import lab export</source>
         <translation>Labor-Export importieren</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="511"/>
+        <location filename="../app/gui/mainwindow.cpp" line="514"/>
         <source>Lab exports (*.bwlab.json *.json)</source>
         <translation>Labor-Exporte (*.bwlab.json *.json)</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="515"/>
+        <location filename="../app/gui/mainwindow.cpp" line="518"/>
         <source>New lab file for the import</source>
         <translation>Neue Labordatei für den Import</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="520"/>
+        <location filename="../app/gui/mainwindow.cpp" line="523"/>
         <source>Import</source>
         <translation>Import</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="520"/>
-        <location filename="../app/gui/mainwindow.cpp" line="552"/>
+        <location filename="../app/gui/mainwindow.cpp" line="523"/>
+        <location filename="../app/gui/mainwindow.cpp" line="555"/>
         <source>Nothing was imported: %1</source>
         <translation>Nichts wurde importiert: %1</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="531"/>
+        <location filename="../app/gui/mainwindow.cpp" line="534"/>
         <source>Export lab</source>
         <translation>Labor exportieren</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="531"/>
+        <location filename="../app/gui/mainwindow.cpp" line="534"/>
         <source>Lab exports (*.bwlab.json)</source>
         <translation>Labor-Exporte (*.bwlab.json)</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="535"/>
+        <location filename="../app/gui/mainwindow.cpp" line="538"/>
         <source>Export</source>
         <translation>Export</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="537"/>
+        <location filename="../app/gui/mainwindow.cpp" line="540"/>
         <source>Exported to %1</source>
         <translation>Exportiert nach %1</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="544"/>
-        <location filename="../app/gui/mainwindow.cpp" line="551"/>
+        <location filename="../app/gui/mainwindow.cpp" line="547"/>
+        <location filename="../app/gui/mainwindow.cpp" line="554"/>
         <source>Import eyewear inventory</source>
         <translation>Schutzbrillenbestand importieren</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="545"/>
+        <location filename="../app/gui/mainwindow.cpp" line="548"/>
         <source>CSV files (*.csv);;All files (*)</source>
         <translation>CSV-Dateien (*.csv);;Alle Dateien (*)</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/gui/mainwindow.cpp" line="558"/>
+        <location filename="../app/gui/mainwindow.cpp" line="561"/>
         <source>Imported %n eyewear item(s).</source>
         <translation>
             <numerusform>%n Schutzbrille importiert.</numerusform>
@@ -1836,32 +1891,32 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="566"/>
+        <location filename="../app/gui/mainwindow.cpp" line="569"/>
         <source>Back up lab file</source>
         <translation>Labordatei sichern</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="570"/>
+        <location filename="../app/gui/mainwindow.cpp" line="573"/>
         <source>Backup</source>
         <translation>Sicherungskopie</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="572"/>
+        <location filename="../app/gui/mainwindow.cpp" line="575"/>
         <source>Backed up to %1</source>
         <translation>Gesichert nach %1</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="587"/>
+        <location filename="../app/gui/mainwindow.cpp" line="590"/>
         <source>About Beamwarden</source>
         <translation>Über Beamwarden</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="588"/>
+        <location filename="../app/gui/mainwindow.cpp" line="591"/>
         <source>&lt;h3&gt;Beamwarden %1&lt;/h3&gt;&lt;p&gt;Exposure limits, hazard distances and eyewear checks for laser labs.&lt;/p&gt;&lt;p&gt;%2&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Beamwarden %1&lt;/h3&gt;&lt;p&gt;Expositionsgrenzwerte, Gefährdungsabstände und Prüfung von Laserschutzbrillen für Laserlabore.&lt;/p&gt;&lt;p&gt;%2&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/gui/mainwindow.cpp" line="471"/>
+        <location filename="../app/gui/mainwindow.cpp" line="474"/>
         <source>Rule set: strictest of IEC 60825-1:2014 and IEC 60825-1:2007</source>
         <translation>Regelwerk: strengster Wert aus IEC 60825-1:2014 und IEC 60825-1:2007</translation>
     </message>
@@ -1869,232 +1924,232 @@
 <context>
     <name>beamwarden::gui::OutputEditor</name>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="56"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="57"/>
         <source>e.g. 800 nm</source>
         <translation>z. B. 800 nm</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="59"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="60"/>
         <source>FWHM of a band, e.g. 27 nm; empty for a line</source>
         <translation>Halbwertsbreite eines Bands, z. B. 27 nm; leer für eine Linie</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="60"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="61"/>
         <source>CW</source>
         <translation>Dauerstrich</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="61"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="62"/>
         <source>Pulsed</source>
         <translation>Gepulst</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="70"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="71"/>
         <source>CW or mean power, e.g. 4 W</source>
         <translation>Dauer- oder mittlere Leistung, z. B. 4 W</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="73"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="75"/>
         <source>per pulse, e.g. 4 mJ</source>
         <translation>je Impuls, z. B. 4 mJ</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="75"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="77"/>
         <source>e.g. 35 fs</source>
         <translation>z. B. 35 fs</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="77"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="79"/>
         <source>e.g. 1 kHz</source>
         <translation>z. B. 1 kHz</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="80"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="82"/>
         <source>no bursts</source>
         <translation>keine Pulsgruppen</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="83"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="85"/>
         <source>rate of the bursts</source>
         <translation>Takt der Gruppen</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="85"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="87"/>
         <source>at the exit, e.g. 10 mm</source>
         <translation>am Austritt, z. B. 10 mm</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="87"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="89"/>
         <source>1/e (63 %)</source>
         <translation>1/e (63 %)</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="88"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="90"/>
         <source>1/e² (86 %)</source>
         <translation>1/e² (86 %)</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="90"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="92"/>
         <source>full angle, e.g. 0.5 mrad</source>
         <translation>voller Winkel, z. B. 0.5 mrad</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="92"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="94"/>
         <source>not declared</source>
         <translation>nicht angegeben</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="92"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="94"/>
         <source>Gaussian</source>
         <translation>gaußförmig</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="92"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="94"/>
         <source>flat-top</source>
         <translation>Flat-Top</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="94"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="105"/>
         <source>Emission</source>
         <translation>Emission</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="96"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="107"/>
         <source>Wavelength</source>
         <translation>Wellenlänge</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="97"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="108"/>
         <source>Bandwidth</source>
         <translation>Bandbreite</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="98"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="109"/>
         <source>Time structure</source>
         <translation>Zeitverhalten</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="99"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="110"/>
         <source>Power</source>
         <translation>Leistung</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="100"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="111"/>
         <source>Pulse energy</source>
         <translation>Impulsenergie</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="101"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="112"/>
         <source>Pulse duration</source>
         <translation>Impulsdauer</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="102"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="113"/>
         <source>Repetition rate</source>
         <translation>Pulswiederholfrequenz</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="103"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="114"/>
         <source>Pulses per burst</source>
         <translation>Impulse je Pulsgruppe</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="104"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="115"/>
         <source>Burst rate</source>
         <translation>Pulsgruppenfrequenz</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="107"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="118"/>
         <source>Beam</source>
         <translation>Strahl</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="109"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="120"/>
         <source>Diameter</source>
         <translation>Durchmesser</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="110"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="121"/>
         <source>Divergence</source>
         <translation>Divergenz</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="111"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="122"/>
         <source>Given at</source>
         <translation>Angegeben bei</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="112"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="123"/>
         <source>Profile</source>
         <translation>Profil</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="115"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="126"/>
         <source>Output name</source>
         <translation>Name des Ausgangs</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="127"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="138"/>
         <source>output name</source>
         <translation>Name des Ausgangs</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="140"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="151"/>
         <source>wavelength</source>
         <translation>Wellenlänge</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="152"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="163"/>
         <source>bandwidth</source>
         <translation>Bandbreite</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="159"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="170"/>
         <source>time structure</source>
         <translation>Zeitverhalten</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="169"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="180"/>
         <source>power</source>
         <translation>Leistung</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="171"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="182"/>
         <source>pulse energy</source>
         <translation>Impulsenergie</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="175"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="186"/>
         <source>pulse duration</source>
         <translation>Impulsdauer</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="177"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="188"/>
         <source>repetition rate</source>
         <translation>Pulswiederholfrequenz</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="179"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="190"/>
         <source>beam diameter</source>
         <translation>Strahldurchmesser</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="182"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="193"/>
         <source>divergence</source>
         <translation>Divergenz</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="193"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="204"/>
         <source>bursts</source>
         <translation>Pulsgruppen</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="200"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="211"/>
         <source>beam definition</source>
         <translation>Strahldefinition</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/outputeditor.cpp" line="204"/>
+        <location filename="../app/gui/panels/outputeditor.cpp" line="215"/>
         <source>beam profile</source>
         <translation>Strahlprofil</translation>
     </message>
@@ -2102,32 +2157,32 @@
 <context>
     <name>beamwarden::gui::PanelPage</name>
     <message>
-        <location filename="../app/gui/panels/panelpage.cpp" line="16"/>
+        <location filename="../app/gui/panels/panelpage.cpp" line="17"/>
         <source>No lasers in this lab yet.</source>
         <translation>Noch keine Laser in diesem Labor.</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/panelpage.cpp" line="18"/>
+        <location filename="../app/gui/panels/panelpage.cpp" line="19"/>
         <source>No eyewear on the shelf yet.</source>
         <translation>Noch keine Schutzbrillen im Bestand.</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/panelpage.cpp" line="20"/>
+        <location filename="../app/gui/panels/panelpage.cpp" line="21"/>
         <source>Select a laser to see its assessment.</source>
         <translation>Wählen Sie einen Laser, um seine Bewertung zu sehen.</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/panelpage.cpp" line="22"/>
+        <location filename="../app/gui/panels/panelpage.cpp" line="23"/>
         <source>Select a laser to plot its limit curves.</source>
         <translation>Wählen Sie einen Laser, um seine Grenzwertkurven zu zeichnen.</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/panelpage.cpp" line="24"/>
+        <location filename="../app/gui/panels/panelpage.cpp" line="25"/>
         <source>Select a laser to preview its hazard sheet.</source>
         <translation>Wählen Sie einen Laser, um sein Gefährdungsblatt anzuzeigen.</translation>
     </message>
     <message>
-        <location filename="../app/gui/panels/panelpage.cpp" line="26"/>
+        <location filename="../app/gui/panels/panelpage.cpp" line="27"/>
         <source>No assessments recorded yet.</source>
         <translation>Noch keine Bewertungen erfasst.</translation>
     </message>
@@ -2140,7 +2195,7 @@
         <translation>hier wird ein Wert benötigt</translation>
     </message>
     <message>
-        <location filename="../app/gui/widgets/quantityfield.cpp" line="99"/>
+        <location filename="../app/gui/widgets/quantityfield.cpp" line="106"/>
         <source>not accepted</source>
         <translation>nicht angenommen</translation>
     </message>
@@ -2731,21 +2786,6 @@
         <location filename="../app/sheet/sheetsections.cpp" line="305"/>
         <source>Signatures</source>
         <translation>Unterschriften</translation>
-    </message>
-</context>
-<context>
-    <name>Verdict</name>
-    <message>
-        <source>covers</source>
-        <translation>schützt</translation>
-    </message>
-    <message>
-        <source>cannot tell</source>
-        <translation>nicht prüfbar</translation>
-    </message>
-    <message>
-        <source>falls short</source>
-        <translation>reicht nicht</translation>
     </message>
 </context>
 </TS>

@@ -258,6 +258,8 @@ Result<void> MainWindow::openDemoLab()
 void MainWindow::attachDocument(std::unique_ptr<LabDocument> document)
 {
     m_assessment.reset();
+    m_eyewearPanel->setAssessment(nullptr); // they point into m_assessment
+    m_historyPanel->setLaser(-1, nullptr);
     m_document = std::move(document);
     LabDocument* doc = m_document.get();
     connect(doc, &LabDocument::lasersReset, this, &MainWindow::refreshLaserSelector);
@@ -299,11 +301,11 @@ void MainWindow::refreshLaserSelector()
 void MainWindow::recompute()
 {
     const int index = m_laserSelector->currentIndex();
-    m_assessment.reset();
+    m_assessment.reset(); // the eyewear and history panels are given the new one (or null) below
     if (!m_document || index < 0 || static_cast<std::size_t>(index) >= m_document->lasers().size()) {
         m_assessmentPanel->clear();
-        m_eyewearPanel->setAssessment(std::nullopt);
-        m_historyPanel->setLaser(-1, std::nullopt);
+        m_eyewearPanel->setAssessment(nullptr);
+        m_historyPanel->setLaser(-1, nullptr);
         refreshCurveSelectors();
         m_curvesStale = m_sheetStale = true;
         refreshDeferredPanels();
@@ -318,8 +320,9 @@ void MainWindow::recompute()
         m_assessment = std::move(*result);
         m_assessmentPanel->showAssessment(*m_assessment);
     }
-    m_eyewearPanel->setAssessment(m_assessment);
-    m_historyPanel->setLaser(index, m_assessment);
+    const assessment::LaserAssessment* shown = m_assessment ? &*m_assessment : nullptr;
+    m_eyewearPanel->setAssessment(shown);
+    m_historyPanel->setLaser(index, shown);
     refreshCurveSelectors();
     m_curvesStale = true;
     m_sheetStale = true;

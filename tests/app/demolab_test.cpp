@@ -17,7 +17,7 @@
 #include <QLineEdit>
 #include <QListWidget>
 #include <QPushButton>
-#include <QTableWidget>
+#include <QTableView>
 #include <QTemporaryDir>
 #include <QTest>
 #include <QTranslator>
@@ -70,7 +70,7 @@ TEST_CASE("Opening the demo lab fills the panels", "[gui][demo]")
 
     CHECK(window.document()->lasers().size() == 7); // vocabulary.md: seven demo lasers
     CHECK(window.findChild<QListWidget*>(QStringLiteral("laserList"))->count() == 7);
-    CHECK(window.findChild<QTableWidget*>(QStringLiteral("eyewearShelf"))->rowCount() ==
+    CHECK(window.findChild<QTableView*>(QStringLiteral("eyewearShelf"))->model()->rowCount() ==
           static_cast<int>(window.document()->eyewear().size()));
     window.selectLaser(laserIndex(window, "Amplifier A1"));
     REQUIRE(window.currentAssessment().has_value());

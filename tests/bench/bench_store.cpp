@@ -120,7 +120,30 @@ BENCHMARK(BM_StoreOpenScaling)
     ->Args({1000, 1000, 100000})
     ->Unit(benchmark::kMillisecond);
 
-// Everything the file holds, as the desktop application reads it on opening (LabDocument).
+// What the desktop application reads on opening (LabDocument): the records without the assessments, which it reads
+// a laser at a time.
+void BM_StoreRecordsLargeLab(benchmark::State& state)
+{
+    const auto* path = labFile(state, LargeLabSize{});
+    if (path == nullptr)
+        return;
+    for (auto _ : state) {
+        auto store = LabStore::open(*path);
+        if (!store) {
+            state.SkipWithError(store.error().message().c_str());
+            return;
+        }
+        auto records = store->records();
+        if (!records) {
+            state.SkipWithError(records.error().message().c_str());
+            return;
+        }
+        benchmark::DoNotOptimize(records->eyewear.data());
+    }
+}
+BENCHMARK(BM_StoreRecordsLargeLab)->Unit(benchmark::kMillisecond);
+
+// Everything the file holds, as an export reads it.
 void BM_StoreContentsScaling(benchmark::State& state)
 {
     const auto* path = labFile(state, sizeFrom(state));

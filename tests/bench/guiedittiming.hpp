@@ -14,8 +14,10 @@ class MainWindow;
 namespace beamwarden::bench {
 
 struct EditTimes {
-    std::vector<double> ms; // one per timed edit
-    QString problem;        // empty, or why the edits could not be timed (an edit that did not take effect)
+    std::vector<double> ms;    // wall time, one per timed edit
+    std::vector<double> cpuMs; // this thread's processor time over the same span: what the work costs without
+                               // waiting for the disk or for other programs on a busy machine
+    QString problem;           // empty, or why the edits could not be timed (an edit that did not take effect)
 };
 
 // With `panel` shown, types alternately `first` and `second` nanometres into the wavelength field of the selected

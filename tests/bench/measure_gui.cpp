@@ -4,8 +4,9 @@
 //                              panels (Lasers, Assessment, Limit curves); median of many edits, demo lab, in-process
 //   gui_cold_start             launch of BIN_DIR/beamwarden --demo to its first painted window; median of starts
 //   gui_peak_memory_large_lab  peak resident memory of beamwarden --lab LARGE with every panel shown and painted
-// Runs on the offscreen platform unless QT_QPA_PLATFORM says otherwise; everything it writes (settings, the demo
-// lab, the large lab file) goes to SCRATCH_DIR, never to the user's home.
+// Runs on the offscreen platform unless QT_QPA_PLATFORM says otherwise; what it writes (settings, the demo lab) goes
+// to SCRATCH_DIR, never to the user's home, and the large lab file to the benchmarks' cache shared with bench_store
+// ($BEAMWARDEN_BENCH_SCRATCH, else <build>/bench-scratch), where later runs find it.
 #include "childprocess.hpp"
 #include "guiedittiming.hpp"
 #include "largelab.hpp"
@@ -86,23 +87,31 @@ bool measureEdits()
     window.show();
     beamwarden::bench::settle();
     double slowest = -1;
-    const std::pair<Panel, const char*> shown[] = {{Panel::Lasers, "gui_edit_to_update_lasers_panel"},
+    double slowestCpu = -1;
+    const std::pair<Panel, std::string> shown[] = {{Panel::Lasers, "gui_edit_to_update_lasers_panel"},
                                                    {Panel::Assessment, "gui_edit_to_update_assessment_panel"},
                                                    {Panel::LimitCurves, "gui_edit_to_update_limit_curves_panel"}};
-    // BEAMWARDEN_MEASURE_EDITS sets fewer edits, for a run under valgrind.
+    // BEAMWARDEN_MEASURE_EDITS sets fewer edits, for a run under valgrind; BEAMWARDEN_MEASURE_PANEL below.
     const char* count = std::getenv("BEAMWARDEN_MEASURE_EDITS");
     const int timed = count != nullptr ? std::max(1, std::atoi(count)) : kEditsTimed;
+    // BEAMWARDEN_MEASURE_PANEL picks one of them (a part of the name, e.g. "curves"), for profiling.
+    const char* onlyPanel = std::getenv("BEAMWARDEN_MEASURE_PANEL");
     for (const auto& [panel, name] : shown) {
+        if (onlyPanel != nullptr && name.find(onlyPanel) == std::string::npos)
+            continue;
         const auto times = beamwarden::bench::timeWavelengthEdits(window, panel, 800, 805, kEditWarmUp, timed);
         if (!times.problem.isEmpty()) {
-            note(std::string(name) + ": " + times.problem.toStdString());
+            note(name + ": " + times.problem.toStdString());
             return false;
         }
         const double m = median(times.ms);
-        measure(name, m, "ms");
+        measure(name.c_str(), m, "ms");
+        measure((name + "_cpu").c_str(), median(times.cpuMs), "ms");
         slowest = std::max(slowest, m);
+        slowestCpu = std::max(slowestCpu, median(times.cpuMs));
     }
     measure("gui_edit_to_update", slowest, "ms");
+    measure("gui_edit_to_update_cpu", slowestCpu, "ms");
     return true;
 }
 
@@ -132,10 +141,13 @@ bool measureColdStart(const fs::path& program, const std::vector<std::string>& e
 }
 
 // (c) The real program on the large lab, every panel shown and painted in turn.
-bool measurePeakMemory(const fs::path& program, const std::vector<std::string>& environment, const fs::path& scratch)
+bool measurePeakMemory(const fs::path& program, const std::vector<std::string>& environment)
 {
-    auto lab = beamwarden::bench::cachedLargeLab(scratch, beamwarden::bench::LargeLabSize{},
-                                                 program.parent_path() / "make_large_lab");
+    // The large lab lives in the benchmarks' shared cache, beside bench_store's: packaging/bench.sh gives this
+    // program a new scratch folder on every run, and writing the file takes the better part of a minute.
+    auto lab =
+        beamwarden::bench::cachedLargeLab(beamwarden::bench::defaultScratchFolder(), beamwarden::bench::LargeLabSize{},
+                                          program.parent_path() / "make_large_lab");
     if (!lab) {
         note("the large lab could not be written: " + lab.error().message());
         return false;
@@ -183,7 +195,7 @@ int main(int argc, char* argv[])
         if (only.empty() || only == "start")
             ok = measureColdStart(program, environment) && ok;
         if (only.empty() || only == "memory")
-            ok = measurePeakMemory(program, environment, scratch) && ok;
+            ok = measurePeakMemory(program, environment) && ok;
         QCoreApplication::exit(0);
     });
     QApplication::exec();

@@ -186,3 +186,18 @@ TEST_CASE("cli eyewear check: a marking that does not parse exits 2", "[cli][eye
     // the reason names the failing part
     CHECK(out.stderrText.find("DD") != std::string::npos);
 }
+
+TEST_CASE("cli eyewear check: without OD data the margin is not known, never NaN or zero", "[cli][eyewear][bad]")
+{
+    // No OD table and no marking: the optical density the item gives is not known (protection.cpp), so the verdict
+    // is "cannot tell" and neither the provided OD nor its wavelength is reported as 0.
+    const auto j = eyewearJson("check", kC40);
+    CHECK(j["verdict"] == "cannot tell");
+    CHECK(j["provided_od"].is_null());
+    CHECK(j["margin_od"].is_null());
+    CHECK(j["worst_wavelength_nm"].is_null());
+    const auto text = runCli(plus({"eyewear", "check"}, kC40));
+    REQUIRE(text.exitCode == 0);
+    CHECK(text.stdoutText.find("provided: not known; margin: cannot tell") != std::string::npos);
+    CHECK(text.stdoutText.find("nan") == std::string::npos);
+}

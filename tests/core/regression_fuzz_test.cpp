@@ -147,3 +147,32 @@ TEST_CASE("fuzz finding: an EN 207 range narrower than six decimals prints as 'A
     CHECK(eyewear::format(*eyewear::parseEn207("1064.5 D LB7")) == "1064.5 D LB7");
     CHECK(eyewear::format(*eyewear::parseEn207("740-1100 DIR LB5")) == "740-1100 DIR LB5");
 }
+
+TEST_CASE("fuzz finding: an EN 207 marking under 500 characters as typed prints over 500, which parseEn207 refuses",
+          "[fuzz][eyewear]")
+{
+    // fuzz_en207 (packaging/fuzz.sh 60, after the shortest-decimal fix): 510 bytes, 13 tabs then terms joined by
+    // '+' without spaces. The 500-character limit was applied to the typed line, but format() writes " + " between
+    // terms and "LB" for "L", so the printed marking could exceed the limit and no longer read back. The limit now
+    // holds for the printed form. Smallest form: "1064 D L7" and 98 times "+D L7" is 499 characters typed, 794
+    // printed (computed: 10 + 8 x 98).
+    std::string typed = "1064 D L7";
+    for (int i = 0; i < 98; ++i)
+        typed += "+D L7";
+    REQUIRE(typed.size() == 499);
+    const auto refused = eyewear::parseEn207(typed);
+    REQUIRE_FALSE(refused.has_value());
+    CHECK_THAT(refused.error().allowed, Catch::Matchers::Contains("at most 500 characters as printed") &&
+                                            Catch::Matchers::Contains("prints as 794 characters"));
+
+    // Just under the limit as printed: 10 + 8 x 61 = 498 characters (computed), accepted and read back.
+    std::string shorter = "1064 D L7";
+    for (int i = 0; i < 61; ++i)
+        shorter += "+D L7";
+    const auto accepted = eyewear::parseEn207(shorter);
+    REQUIRE(accepted.has_value());
+    const std::string printed = eyewear::format(*accepted);
+    CHECK(printed.size() == 498);
+    CHECK(fuzzpromise::en207(shorter).empty());
+    CHECK(fuzzpromise::en207(printed).empty());
+}

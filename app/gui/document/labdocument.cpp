@@ -2,6 +2,8 @@
 
 #include "document/commands.hpp"
 
+#include <algorithm>
+
 namespace beamwarden::gui {
 
 namespace {
@@ -23,7 +25,7 @@ Result<std::unique_ptr<LabDocument>> LabDocument::open(const QString& path)
     auto store = store::LabStore::open(path.toStdString());
     if (!store)
         return std::unexpected(store.error());
-    auto contents = store->contents();
+    auto contents = store->records();
     if (!contents)
         return std::unexpected(contents.error());
     return std::unique_ptr<LabDocument>(new LabDocument(std::move(*store), std::move(*contents)));
@@ -39,14 +41,54 @@ QString LabDocument::filePath() const
     return QString::fromStdString(m_store.path().string());
 }
 
-std::vector<model::Assessment> LabDocument::assessments(model::RecordId laserId) const
+const std::vector<model::Assessment>& LabDocument::assessments(model::RecordId laserId)
 {
-    std::vector<model::Assessment> out;
-    for (const model::Assessment& a : m_contents.assessments) {
-        if (a.laserId == laserId)
-            out.push_back(a);
+    if (laserId == m_historyLaser)
+        return m_history;
+    m_historyLaser = 0;
+    m_history.clear();
+    auto read = m_store.assessments(laserId);
+    if (!read) {
+        reportFailure(read.error());
+        return m_history;
     }
-    return out;
+    m_history = std::move(*read);
+    m_historyLaser = laserId;
+    return m_history;
+}
+
+void LabDocument::refreshHistoryAfterLaserChange(model::RecordId laserId)
+{
+    if (laserId != m_historyLaser)
+        return; // read afresh when it is next asked for
+    // Only an approved assessment that is still current can be marked out of date by a change.
+    const bool markable = std::any_of(m_history.begin(), m_history.end(), [](const model::Assessment& a) {
+        return a.status == model::AssessmentStatus::Approved && !a.outOfDate;
+    });
+    if (!markable)
+        return;
+    m_historyLaser = 0;
+    (void)assessments(laserId);
+    Q_EMIT assessmentsChanged(laserId);
+}
+
+void LabDocument::updateCachedAssessment(model::RecordId assessmentId)
+{
+    auto stored = m_store.assessment(assessmentId);
+    if (!stored) {
+        m_historyLaser = 0; // read again when asked for
+        m_history.clear();
+        return;
+    }
+    if (stored->laserId == m_historyLaser) {
+        const auto existing = std::find_if(m_history.begin(), m_history.end(),
+                                           [&](const model::Assessment& a) { return a.id == assessmentId; });
+        if (existing != m_history.end())
+            *existing = *stored;
+        else
+            m_history.push_back(*stored);
+    }
+    Q_EMIT assessmentsChanged(stored->laserId);
 }
 
 bool LabDocument::reportFailure(const InputError& error)
@@ -96,16 +138,7 @@ Result<model::RecordId> LabDocument::saveAssessment(const model::Assessment& ass
     auto id = m_store.saveAssessment(assessment);
     if (!id)
         return id;
-    auto stored = m_store.assessment(*id);
-    if (!stored)
-        return std::unexpected(stored.error());
-    auto existing = std::find_if(m_contents.assessments.begin(), m_contents.assessments.end(),
-                                 [&](const model::Assessment& a) { return a.id == *id; });
-    if (existing != m_contents.assessments.end())
-        *existing = *stored;
-    else
-        m_contents.assessments.push_back(*stored);
-    Q_EMIT assessmentsChanged(stored->laserId);
+    updateCachedAssessment(*id);
     return id;
 }
 
@@ -114,14 +147,7 @@ Result<void> LabDocument::signOff(model::RecordId assessmentId, const model::Sig
     auto done = m_store.signOff(assessmentId, signOff);
     if (!done)
         return std::unexpected(done.error());
-    auto stored = m_store.assessment(assessmentId);
-    if (!stored)
-        return std::unexpected(stored.error());
-    for (model::Assessment& a : m_contents.assessments) {
-        if (a.id == assessmentId)
-            a = *stored;
-    }
-    Q_EMIT assessmentsChanged(stored->laserId);
+    updateCachedAssessment(assessmentId);
     return {};
 }
 
@@ -136,12 +162,7 @@ bool LabDocument::applyLaser(int index, const model::Laser& laser)
     if (!stored)
         return reportFailure(stored.error());
     m_contents.lasers[static_cast<std::size_t>(index)] = *stored;
-    // A change can mark approved assessments out of date: read them back.
-    if (auto all = m_store.assessments(*id)) {
-        std::erase_if(m_contents.assessments, [&](const model::Assessment& a) { return a.laserId == *id; });
-        m_contents.assessments.insert(m_contents.assessments.end(), all->begin(), all->end());
-        Q_EMIT assessmentsChanged(*id);
-    }
+    refreshHistoryAfterLaserChange(*id);
     Q_EMIT laserChanged(index);
     return true;
 }
@@ -165,9 +186,14 @@ bool LabDocument::removeLaserAt(int index)
 {
     if (!inRange(index, m_contents.lasers.size()))
         return false;
-    auto done = m_store.removeLaser(m_contents.lasers[static_cast<std::size_t>(index)].id);
+    const model::RecordId id = m_contents.lasers[static_cast<std::size_t>(index)].id;
+    auto done = m_store.removeLaser(id);
     if (!done)
         return reportFailure(done.error());
+    if (id == m_historyLaser) {
+        m_historyLaser = 0;
+        m_history.clear();
+    }
     m_contents.lasers.erase(m_contents.lasers.begin() + index);
     Q_EMIT lasersReset();
     return true;

@@ -25,7 +25,10 @@ public:
     [[nodiscard]] const model::Lab& lab() const { return m_contents.lab; }
     [[nodiscard]] const std::vector<model::Laser>& lasers() const { return m_contents.lasers; }
     [[nodiscard]] const std::vector<model::EyewearItem>& eyewear() const { return m_contents.eyewear; }
-    [[nodiscard]] std::vector<model::Assessment> assessments(model::RecordId laserId) const;
+    // A laser's assessments, oldest first, read from the file when another laser's were last asked for: a site's
+    // file holds years of them with their stored results, far more than the views show at once. Empty (and
+    // storeFailed emitted) when the file cannot be read.
+    [[nodiscard]] const std::vector<model::Assessment>& assessments(model::RecordId laserId);
     [[nodiscard]] QString filePath() const;
     [[nodiscard]] QUndoStack* undoStack() { return &m_undo; }
     [[nodiscard]] store::LabStore& store() { return m_store; }
@@ -59,9 +62,15 @@ Q_SIGNALS:
 private:
     LabDocument(store::LabStore store, store::LabContents contents);
     bool reportFailure(const InputError& error);
+    // After a laser's change: read its history again if it may have changed (the file marks approved assessments
+    // out of date) and say so.
+    void refreshHistoryAfterLaserChange(model::RecordId laserId);
+    void updateCachedAssessment(model::RecordId assessmentId);
 
     store::LabStore m_store;
-    store::LabContents m_contents;
+    store::LabContents m_contents;      // lab, lasers, eyewear; no assessments (see assessments())
+    model::RecordId m_historyLaser = 0; // whose assessments m_history holds; 0: none
+    std::vector<model::Assessment> m_history;
     QUndoStack m_undo;
 };
 

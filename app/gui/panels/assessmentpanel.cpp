@@ -1,12 +1,16 @@
 #include "panels/assessmentpanel.hpp"
 
 #include "beamwarden/limits/report.hpp"
+#include "models/verdictlistmodel.hpp"
 #include "widgets/palette.hpp"
 
+#include <QAbstractTextDocumentLayout>
 #include <QHeaderView>
 #include <QLabel>
+#include <QSignalBlocker>
 #include <QSplitter>
 #include <QTextBrowser>
+#include <QTreeView>
 #include <QTreeWidget>
 #include <QVBoxLayout>
 
@@ -15,6 +19,8 @@ namespace beamwarden::gui {
 namespace {
 
 enum class Column { Item, Mpe, Exposure, Eye, Skin, Nohd, Od, Count };
+constexpr qsizetype kNamedCovering = 12; // covering items named in the summary
+constexpr int kSummaryMaxHeight = 220;   // px; a longer summary scrolls
 constexpr int col(Column c)
 {
     return static_cast<int>(c);
@@ -111,9 +117,21 @@ AssessmentPanel::AssessmentPanel(QWidget* parent) : QWidget(parent)
     f.setBold(true);
     f.setPointSizeF(f.pointSizeF() * 1.15);
     m_title->setFont(f);
-    m_summary = new QLabel(this);
-    m_summary->setWordWrap(true);
-    m_summary->setTextFormat(Qt::RichText);
+    // A text view rather than a wrapped label: a label lays its rich text out afresh for each size the layouts ask
+    // (natural, minimum, height for a width), every time an edit changes a figure in it. The view lays it out once
+    // and takes the height the text needs, up to a limit beyond which it scrolls.
+    m_summary = new QTextBrowser(this);
+    m_summary->setObjectName(QStringLiteral("assessmentSummary"));
+    m_summary->setFrameShape(QFrame::NoFrame);
+    m_summary->setHorizontalScrollBarPolicy(Qt::ScrollBarAlwaysOff);
+    m_summary->setSizePolicy(QSizePolicy::Expanding, QSizePolicy::Fixed);
+    setSummaryColour(QColor());
+    m_summary->setFixedHeight(0);
+    connect(m_summary->document()->documentLayout(), &QAbstractTextDocumentLayout::documentSizeChanged, this,
+            [this](const QSizeF& size) {
+                const int needed = static_cast<int>(std::ceil(size.height())) + 2 * m_summary->frameWidth();
+                m_summary->setFixedHeight(std::min(needed, kSummaryMaxHeight));
+            });
 
     m_results = new QTreeWidget(this);
     m_results->setObjectName(QStringLiteral("assessmentResults"));
@@ -125,11 +143,18 @@ AssessmentPanel::AssessmentPanel(QWidget* parent) : QWidget(parent)
     m_results->setUniformRowHeights(true);
     m_results->header()->setStretchLastSection(true);
 
-    m_eyewear = new QTreeWidget(this);
+    m_eyewearModel = new VerdictListModel({tr("Eyewear"), tr("Verdict"), tr("Margin (OD)")}, 1, this);
+    m_eyewear = new QTreeView(this);
     m_eyewear->setObjectName(QStringLiteral("assessmentEyewear"));
-    m_eyewear->setColumnCount(3);
-    m_eyewear->setHeaderLabels({tr("Eyewear"), tr("Verdict"), tr("Margin (OD)")});
+    m_eyewear->setModel(m_eyewearModel);
     m_eyewear->setAlternatingRowColors(true);
+    m_eyewear->setUniformRowHeights(true);
+    // A reason reads across the columns. Spans are set when an item is opened: setting one for every reason of a
+    // large shelf up front searched the view's rows once per reason.
+    connect(m_eyewear, &QTreeView::expanded, this, [this](const QModelIndex& item) {
+        for (int r = 0; r < m_eyewearModel->rowCount(item); ++r)
+            m_eyewear->setFirstColumnSpanned(r, item, true);
+    });
 
     m_provenance = new QTextBrowser(this);
     m_provenance->setObjectName(QStringLiteral("assessmentProvenance"));
@@ -155,20 +180,32 @@ AssessmentPanel::AssessmentPanel(QWidget* parent) : QWidget(parent)
 
 void AssessmentPanel::clear()
 {
-    m_assessment.reset();
+    m_outputs.clear();
     m_title->setText(tr("No laser selected"));
-    m_summary->setText(QString());
+    m_summary->clear();
+    m_summaryHtml.clear();
     m_results->clear();
-    m_eyewear->clear();
+    m_eyewearModel->clear();
     m_provenance->clear();
+    m_provenanceHtml.clear();
 }
 
 void AssessmentPanel::showRefusal(const QString& laserName, const QString& message)
 {
     clear();
     m_title->setText(laserName);
-    m_summary->setText(tr("Not assessed: %1").arg(message));
-    m_summary->setStyleSheet(QStringLiteral("color: %1;").arg(palette::kVermillion.name()));
+    m_summary->setPlainText(tr("Not assessed: %1").arg(message));
+    setSummaryColour(palette::kVermillion);
+}
+
+void AssessmentPanel::setSummaryColour(const QColor& colour)
+{
+    if (colour == m_summaryColour && !m_summary->styleSheet().isEmpty())
+        return; // a new style sheet restyles the widget: not on every edit
+    m_summaryColour = colour;
+    m_summary->setStyleSheet(
+        colour.isValid() ? QStringLiteral("QTextBrowser { background: transparent; color: %1; }").arg(colour.name())
+                         : QStringLiteral("QTextBrowser { background: transparent; }"));
 }
 
 int AssessmentPanel::resultRowCount() const
@@ -183,16 +220,24 @@ void AssessmentPanel::showAssessment(const assessment::LaserAssessment& a)
 {
     const QString currentKey =
         m_results->currentItem() ? m_results->currentItem()->data(0, Qt::UserRole).toString() : QString();
-    m_assessment = a;
-    m_summary->setStyleSheet(QString());
+    m_outputs = a.outputs;
+    setSummaryColour(QColor());
     m_title->setText(tr("%1 — %2").arg(q(a.laser.name), q(limits::toString(a.options.rules))));
     // The verdict on the shelf first, then the notes: rich text so that a long list stays readable.
     QString html;
     if (!a.selection.singles.empty()) {
+        // The leanest first (the selection's order); a large shelf's hundreds of names would bury the results.
         QStringList names;
-        for (const eyewear::Choice& c : a.selection.singles)
+        for (const eyewear::Choice& c : a.selection.singles) {
+            if (names.size() == kNamedCovering)
+                break;
             names << q(a.eyewear[c.items.front()].itemName).toHtmlEscaped();
-        html += QStringLiteral("<p><b>%1</b></p>").arg(tr("Covered by: %1.").arg(names.join(QStringLiteral(", "))));
+        }
+        const auto more = static_cast<int>(a.selection.singles.size()) - static_cast<int>(names.size());
+        QString list = names.join(QStringLiteral(", "));
+        if (more > 0)
+            list = tr("%1 and %n more", nullptr, more).arg(list);
+        html += QStringLiteral("<p><b>%1</b></p>").arg(tr("Covered by: %1.").arg(list));
     } else if (!a.selection.pairs.empty()) {
         const eyewear::Choice& c = a.selection.pairs.front();
         html += QStringLiteral("<p><b>%1</b></p>")
@@ -209,8 +254,14 @@ void AssessmentPanel::showAssessment(const assessment::LaserAssessment& a)
     }
     for (const std::string& note : a.notes)
         html += QStringLiteral("<div style='color:#5a6472'>%1</div>").arg(q(note).toHtmlEscaped());
-    m_summary->setText(html);
+    if (html != m_summaryHtml) { // the same words need no new layout
+        m_summary->setHtml(html);
+        m_summaryHtml = html;
+    }
 
+    // The selection is put back below and the provenance shown once, after the rows are rebuilt: the tree's
+    // signals in between would lay out the provenance for no row and then again for the same row.
+    const QSignalBlocker quiet(m_results);
     m_results->clear();
     QTreeWidgetItem* restore = nullptr;
     for (std::size_t o = 0; o < a.outputs.size(); ++o) {
@@ -243,21 +294,26 @@ void AssessmentPanel::showAssessment(const assessment::LaserAssessment& a)
     for (int c = 0; c < col(Column::Od); ++c)
         m_results->resizeColumnToContents(c);
 
-    m_eyewear->clear();
+    // The verdict words once each: every row shares them.
+    const QString words[] = {verdictWords(eyewear::Verdict::Covers), verdictWords(eyewear::Verdict::CannotTell),
+                             verdictWords(eyewear::Verdict::FallsShort)};
+    const auto wordsFor = [&](eyewear::Verdict v) {
+        return v == eyewear::Verdict::Covers ? words[0] : v == eyewear::Verdict::CannotTell ? words[1] : words[2];
+    };
+    std::vector<VerdictListModel::Row> rows;
+    rows.reserve(a.eyewear.size());
     for (const assessment::EyewearOutcome& e : a.eyewear) {
-        auto* item = new QTreeWidgetItem(m_eyewear);
-        item->setText(0, q(e.itemName));
-        item->setText(1, verdictWords(e.check.verdict));
-        item->setForeground(1, verdictColour(e.check.verdict));
-        item->setText(2, std::isfinite(e.check.marginOd) ? QString::number(e.check.marginOd, 'f', 2) : QString());
+        VerdictListModel::Row row;
+        row.columns = {q(e.itemName), wordsFor(e.check.verdict),
+                       std::isfinite(e.check.marginOd) ? QString::number(e.check.marginOd, 'f', 2) : QString()};
+        row.colour = verdictColour(e.check.verdict);
         for (const eyewear::OutputCheck& oc : e.check.outputs) {
-            for (const std::string& reason : oc.reasons) {
-                auto* child = new QTreeWidgetItem(item);
-                child->setText(0, q(reason));
-                child->setFirstColumnSpanned(true);
-            }
+            for (const std::string& reason : oc.reasons)
+                row.reasons.append(q(reason));
         }
+        rows.push_back(std::move(row));
     }
+    m_eyewearModel->setRows(std::move(rows));
     m_eyewear->resizeColumnToContents(0);
     m_results->setCurrentItem(restore
                                   ? restore
@@ -270,13 +326,14 @@ void AssessmentPanel::showAssessment(const assessment::LaserAssessment& a)
 void AssessmentPanel::showProvenance()
 {
     const QTreeWidgetItem* item = m_results->currentItem();
-    if (!m_assessment || !item || item->data(0, Qt::UserRole).toString().isEmpty()) {
+    if (m_outputs.empty() || !item || item->data(0, Qt::UserRole).toString().isEmpty()) {
         m_provenance->clear();
+        m_provenanceHtml.clear();
         return;
     }
     const QStringList key = item->data(0, Qt::UserRole).toString().split(QLatin1Char('/'));
     const auto& ca =
-        m_assessment->outputs[static_cast<std::size_t>(key[0].toInt())].cases[static_cast<std::size_t>(key[1].toInt())];
+        m_outputs[static_cast<std::size_t>(key[0].toInt())].cases[static_cast<std::size_t>(key[1].toInt())];
     const hazard::HazardResult& h = ca.eye;
     const hazard::LineResult& line = h.lines[h.governingLine];
     QString html;
@@ -306,7 +363,12 @@ void AssessmentPanel::showProvenance()
     html += QStringLiteral("</ul>");
     for (const std::string& n : h.notes)
         html += QStringLiteral("<p style='color:%1'>%2</p>").arg(palette::kVermillion.name(), q(n).toHtmlEscaped());
-    m_provenance->setHtml(html);
+    // Laid out afresh on every setHtml: an edit that leaves this figure's words as they were (or asks twice, once
+    // for the restored selection) costs nothing.
+    if (html != m_provenanceHtml) {
+        m_provenanceHtml = html;
+        m_provenance->setHtml(html);
+    }
 }
 
 } // namespace beamwarden::gui

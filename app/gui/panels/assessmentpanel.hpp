@@ -3,15 +3,19 @@
 // covers it and why others fall short, and the provenance of the selected figure in words.
 #include "beamwarden/assessment/assessment.hpp"
 
+#include <QColor>
 #include <QWidget>
 
-#include <optional>
+#include <vector>
 
 class QLabel;
 class QTextBrowser;
+class QTreeView;
 class QTreeWidget;
 
 namespace beamwarden::gui {
+
+class VerdictListModel;
 
 class AssessmentPanel : public QWidget {
     Q_OBJECT
@@ -25,13 +29,19 @@ public:
 
 private:
     void showProvenance();
+    void setSummaryColour(const QColor& colour);
 
-    std::optional<assessment::LaserAssessment> m_assessment;
+    // What the provenance needs: the outputs' figures (the eyewear checks of a large shelf are kept by the caller).
+    std::vector<assessment::OutputAssessment> m_outputs;
     QLabel* m_title = nullptr;
-    QLabel* m_summary = nullptr;
+    QTextBrowser* m_summary = nullptr;
+    QString m_summaryHtml;  // what m_summary shows
+    QColor m_summaryColour; // invalid: the panel's text colour
     QTreeWidget* m_results = nullptr;
-    QTreeWidget* m_eyewear = nullptr;
+    VerdictListModel* m_eyewearModel = nullptr;
+    QTreeView* m_eyewear = nullptr;
     QTextBrowser* m_provenance = nullptr;
+    QString m_provenanceHtml; // what m_provenance shows
 };
 
 // Text for a hazard distance ("29.27 km", "0 m (below the MPE at the exit)", "no finite distance").

@@ -3,6 +3,7 @@
 #include "beamwarden/eyewear/odtable.hpp"
 #include "beamwarden/eyewear/protection.hpp"
 #include "document/labdocument.hpp"
+#include "models/eyewearshelfmodel.hpp"
 #include "widgets/palette.hpp"
 #include "widgets/quantityfield.hpp"
 
@@ -17,7 +18,7 @@
 #include <QRegularExpression>
 #include <QSpinBox>
 #include <QSplitter>
-#include <QTableWidget>
+#include <QTableView>
 #include <QTreeWidget>
 #include <QVBoxLayout>
 
@@ -62,10 +63,10 @@ QString join(const std::vector<std::string>& list)
 
 EyewearPanel::EyewearPanel(QWidget* parent) : QWidget(parent)
 {
-    m_shelf = new QTableWidget(0, 5, this);
+    m_shelfModel = new EyewearShelfModel(this);
+    m_shelf = new QTableView(this);
     m_shelf->setObjectName(QStringLiteral("eyewearShelf"));
-    m_shelf->setHorizontalHeaderLabels(
-        {tr("Item"), tr("EN 207 / EN 208 markings"), tr("Visible transmittance"), tr("Count"), tr("Location")});
+    m_shelf->setModel(m_shelfModel);
     m_shelf->setSelectionBehavior(QAbstractItemView::SelectRows);
     m_shelf->setSelectionMode(QAbstractItemView::SingleSelection);
     m_shelf->setEditTriggers(QAbstractItemView::NoEditTriggers);
@@ -140,7 +141,7 @@ EyewearPanel::EyewearPanel(QWidget* parent) : QWidget(parent)
     layout->setContentsMargins(0, 0, 0, 0);
     layout->addWidget(split);
 
-    connect(m_shelf, &QTableWidget::currentCellChanged, this, [this] {
+    connect(m_shelf->selectionModel(), &QItemSelectionModel::currentChanged, this, [this] {
         if (!m_loading) {
             showItem();
             showCheck();
@@ -152,7 +153,7 @@ EyewearPanel::EyewearPanel(QWidget* parent) : QWidget(parent)
         model::EyewearItem item;
         item.name = tr("New eyewear %1").arg(m_document->eyewear().size() + 1).toStdString();
         m_document->addEyewear(item);
-        m_shelf->selectRow(m_shelf->rowCount() - 1);
+        m_shelf->selectRow(m_shelfModel->rowCount() - 1);
     });
     connect(m_remove, &QPushButton::clicked, this, [this] {
         if (m_document && currentItem() >= 0)
@@ -211,7 +212,7 @@ void EyewearPanel::setDocument(LabDocument* document)
     reload();
 }
 
-void EyewearPanel::setAssessment(const std::optional<assessment::LaserAssessment>& assessment)
+void EyewearPanel::setAssessment(const assessment::LaserAssessment* assessment)
 {
     m_assessment = assessment;
     showCheck();
@@ -219,35 +220,17 @@ void EyewearPanel::setAssessment(const std::optional<assessment::LaserAssessment
 
 int EyewearPanel::currentItem() const
 {
-    return m_shelf->currentRow();
+    return m_shelf->currentIndex().row();
 }
 
 void EyewearPanel::reload()
 {
     m_loading = true;
-    const int row = std::max(0, m_shelf->currentRow());
-    m_shelf->setRowCount(0);
-    if (m_document) {
-        for (const model::EyewearItem& item : m_document->eyewear()) {
-            const int r = m_shelf->rowCount();
-            m_shelf->insertRow(r);
-            std::vector<std::string> markings = item.en207Markings;
-            markings.insert(markings.end(), item.en208Markings.begin(), item.en208Markings.end());
-            m_shelf->setItem(r, 0, new QTableWidgetItem(q(item.name)));
-            m_shelf->setItem(r, 1,
-                             new QTableWidgetItem(join(markings).replace(QLatin1Char('\n'), QStringLiteral("; "))));
-            m_shelf->setItem(
-                r, 2,
-                new QTableWidgetItem(item.visibleTransmittance > 0
-                                         ? QStringLiteral("%1 %").arg(item.visibleTransmittance * 100, 0, 'f', 0)
-                                         : tr("not known")));
-            m_shelf->setItem(r, 3, new QTableWidgetItem(QString::number(item.count)));
-            m_shelf->setItem(r, 4, new QTableWidgetItem(q(item.location)));
-        }
-    }
+    const int row = std::max(0, currentItem());
+    m_shelfModel->setShelf(m_document ? &m_document->eyewear() : nullptr);
     m_shelf->resizeColumnsToContents();
     m_shelf->horizontalHeader()->setSectionResizeMode(1, QHeaderView::Stretch);
-    m_shelf->setCurrentCell(std::min(row, m_shelf->rowCount() - 1), 0);
+    m_shelf->setCurrentIndex(m_shelfModel->index(std::min(row, m_shelfModel->rowCount() - 1), 0));
     m_loading = false;
     showItem();
     showCheck();

@@ -12,11 +12,12 @@ class QLineEdit;
 class QPlainTextEdit;
 class QPushButton;
 class QSpinBox;
-class QTableWidget;
+class QTableView;
 class QTreeWidget;
 
 namespace beamwarden::gui {
 
+class EyewearShelfModel;
 class LabDocument;
 class QuantityField;
 
@@ -25,8 +26,9 @@ class EyewearPanel : public QWidget {
 public:
     explicit EyewearPanel(QWidget* parent = nullptr);
     void setDocument(LabDocument* document);
-    // The current laser's assessment (its eyewear checks are shown for the selected item).
-    void setAssessment(const std::optional<assessment::LaserAssessment>& assessment);
+    // The current laser's assessment (its eyewear checks are shown for the selected item), or null; the caller's,
+    // kept alive until the next call (a copy of a large shelf's checks would cost tens of megabytes).
+    void setAssessment(const assessment::LaserAssessment* assessment);
     [[nodiscard]] int currentItem() const;
 
 private:
@@ -36,9 +38,10 @@ private:
     void commitText(); // markings and OD table: validated, stored only when they parse
 
     LabDocument* m_document = nullptr;
-    std::optional<assessment::LaserAssessment> m_assessment;
+    const assessment::LaserAssessment* m_assessment = nullptr;
     bool m_loading = false;
-    QTableWidget* m_shelf = nullptr;
+    EyewearShelfModel* m_shelfModel = nullptr;
+    QTableView* m_shelf = nullptr;
     QPushButton* m_add = nullptr;
     QPushButton* m_remove = nullptr;
     QLineEdit* m_name = nullptr;

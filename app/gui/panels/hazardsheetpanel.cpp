@@ -19,6 +19,7 @@
 #include <QVBoxLayout>
 
 #include <algorithm>
+#include <cmath>
 
 namespace beamwarden::gui {
 
@@ -26,6 +27,9 @@ namespace {
 
 constexpr int kPageGap = 14;
 constexpr double kMaxPreviewDpi = 110.0;
+// A short sheet is rendered whole; of a longer one, the pages within this many pages of the view.
+constexpr int kShortSheet = 4;
+constexpr int kNearbyPages = 1;
 
 } // namespace
 
@@ -89,6 +93,7 @@ HazardSheetPanel::HazardSheetPanel(QWidget* parent) : QWidget(parent)
         QStringLiteral("#sheetPreview, #sheetPages { background: %1; }").arg(palette::kRail.name()));
 
     m_scroll->viewport()->installEventFilter(this);
+    connect(m_scroll->verticalScrollBar(), &QScrollBar::valueChanged, this, &HazardSheetPanel::renderNearbyPages);
     m_refit = new QTimer(this);
     m_refit->setSingleShot(true);
     m_refit->setInterval(60);
@@ -108,9 +113,9 @@ HazardSheetPanel::HazardSheetPanel(QWidget* parent) : QWidget(parent)
 
 HazardSheetPanel::~HazardSheetPanel() = default;
 
-void HazardSheetPanel::showSheet(const sheet::SheetContent& content)
+void HazardSheetPanel::showSheet(sheet::SheetContent content)
 {
-    sheet::SheetContent shown = content;
+    sheet::SheetContent shown = std::move(content);
     if (m_pageSizeChosen)
         shown.pageSize = m_pageSize;
     m_pageSize = shown.pageSize;
@@ -207,6 +212,7 @@ void HazardSheetPanel::rebuildPreview()
         delete item->widget();
         delete item;
     }
+    m_pageLabels.clear();
     const bool shown = m_renderer != nullptr;
     m_scroll->setVisible(shown);
     m_empty->setVisible(!shown);
@@ -227,15 +233,45 @@ void HazardSheetPanel::rebuildPreview()
         (m_previewWidth - 2 * kPageGap - m_scroll->verticalScrollBar()->sizeHint().width()) / (paper.width() / 72.0);
     const double dpi = std::clamp(fitDpi, 40.0, kMaxPreviewDpi);
     const double ratio = devicePixelRatioF();
+    m_previewDpi = dpi * ratio;
+    // Every page has the paper's size: each label takes it at once, and its picture when it comes near the view.
+    const QSizeF pixels = paper * (m_previewDpi / 72.0) / ratio;
+    const QSize labelSize =
+        QSize(static_cast<int>(std::lround(pixels.width())), static_cast<int>(std::lround(pixels.height()))) +
+        QSize(2, 2); // the border
+    m_pageHeight = labelSize.height();
     for (int page = 0; page < pages; ++page) {
-        QImage image = m_renderer->renderPage(page, dpi * ratio);
-        image.setDevicePixelRatio(ratio);
         auto* label = new QLabel(m_pagesHost);
         label->setObjectName(QStringLiteral("sheetPage%1").arg(page + 1));
-        label->setPixmap(QPixmap::fromImage(image));
+        label->setFixedSize(labelSize);
         label->setStyleSheet(QStringLiteral("border: 1px solid #b8c0cc; background: white;"));
         label->setAccessibleName(tr("Page %1 of %2").arg(page + 1).arg(pages));
         m_pagesLayout->addWidget(label, 0, Qt::AlignHCenter);
+        m_pageLabels.push_back(label);
+    }
+    renderNearbyPages();
+}
+
+void HazardSheetPanel::renderNearbyPages()
+{
+    if (!m_renderer || m_pageLabels.empty() || m_pageHeight <= 0)
+        return;
+    // The pages are stacked at fixed heights, so the view's scroll position says which are in sight.
+    const int stride = m_pageHeight + kPageGap;
+    const int top = m_scroll->verticalScrollBar()->value();
+    const int first = std::max(0, (top - kPageGap) / stride - kNearbyPages);
+    const int last = (top + m_scroll->viewport()->height()) / stride + kNearbyPages;
+    const double ratio = devicePixelRatioF();
+    for (int page = 0; page < static_cast<int>(m_pageLabels.size()); ++page) {
+        QLabel* label = m_pageLabels[static_cast<std::size_t>(page)];
+        const bool wanted = static_cast<int>(m_pageLabels.size()) <= kShortSheet || (page >= first && page <= last);
+        if (wanted && label->pixmap().isNull()) {
+            QImage image = m_renderer->renderPage(page, m_previewDpi);
+            image.setDevicePixelRatio(ratio);
+            label->setPixmap(QPixmap::fromImage(std::move(image))); // moved: no second copy of the page
+        } else if (!wanted && !label->pixmap().isNull()) {
+            label->setPixmap(QPixmap());
+        }
     }
 }
 

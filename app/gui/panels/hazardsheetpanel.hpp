@@ -6,6 +6,7 @@
 #include <QWidget>
 
 #include <memory>
+#include <vector>
 
 class QButtonGroup;
 class QLabel;
@@ -27,7 +28,7 @@ public:
     ~HazardSheetPanel() override;
 
     // Shows the sheet for `content` on the paper chosen in the panel (the content's paper when first shown).
-    void showSheet(const sheet::SheetContent& content);
+    void showSheet(sheet::SheetContent content); // taken by value: a large shelf's sheet is moved in, not copied
     // Back to the empty state: no laser selected.
     void clear();
     [[nodiscard]] bool hasSheet() const { return m_renderer != nullptr; }
@@ -47,6 +48,9 @@ protected:
 private:
     void chooseExportPath();
     void rebuildPreview();
+    // Renders the pages in and near the view and lets go of the others: a sheet for a large shelf runs to hundreds
+    // of pages, and every page held as a picture costs megabytes.
+    void renderNearbyPages();
 
     std::unique_ptr<sheet::SheetRenderer> m_renderer;
     sheet::PageSize m_pageSize = sheet::PageSize::A4;
@@ -63,6 +67,9 @@ private:
     QLabel* m_empty = nullptr;
     QTimer* m_refit = nullptr; // re-renders the preview once the view has settled at a new width
     int m_previewWidth = 0;
+    double m_previewDpi = 0; // device pixels per inch of the page pictures
+    int m_pageHeight = 0;    // of one page's label, in the host's coordinates
+    std::vector<QLabel*> m_pageLabels;
 };
 
 } // namespace beamwarden::gui

@@ -77,7 +77,7 @@ void HistoryPanel::setDocument(LabDocument* document)
     connect(document, &LabDocument::assessmentsChanged, this, &HistoryPanel::reload);
 }
 
-void HistoryPanel::setLaser(int index, const std::optional<assessment::LaserAssessment>& current)
+void HistoryPanel::setLaser(int index, const assessment::LaserAssessment* current)
 {
     m_laser = index;
     m_current = current;
@@ -93,14 +93,14 @@ void HistoryPanel::reload()
 {
     m_list->clear();
     const bool has = m_document && m_laser >= 0 && static_cast<std::size_t>(m_laser) < m_document->lasers().size();
-    m_record->setEnabled(has && m_current.has_value());
+    m_record->setEnabled(has && m_current != nullptr);
     m_signOff->setEnabled(has);
     if (!has) {
         m_title->setText(tr("Select a laser to see its assessments."));
         return;
     }
     const model::Laser& laser = m_document->lasers()[static_cast<std::size_t>(m_laser)];
-    const auto list = m_document->assessments(laser.id);
+    const auto& list = m_document->assessments(laser.id);
     m_title->setText(list.empty() ? tr("%1 has no recorded assessment yet.").arg(q(laser.name))
                                   : tr("Assessments of %1").arg(q(laser.name)));
     for (const model::Assessment& a : list) {
@@ -160,7 +160,7 @@ void HistoryPanel::signOffSelected()
         return;
     const model::RecordId id = item->data(0, Qt::UserRole).toLongLong();
     const model::Laser& laser = m_document->lasers()[static_cast<std::size_t>(m_laser)];
-    const auto list = m_document->assessments(laser.id);
+    const auto& list = m_document->assessments(laser.id);
     const auto found = std::find_if(list.begin(), list.end(), [&](const model::Assessment& a) { return a.id == id; });
     if (found == list.end())
         return;

@@ -21,7 +21,8 @@ class HistoryPanel : public QWidget {
 public:
     explicit HistoryPanel(QWidget* parent = nullptr);
     void setDocument(LabDocument* document);
-    void setLaser(int index, const std::optional<assessment::LaserAssessment>& current);
+    // `current` (or null) is the caller's, kept alive until the next call.
+    void setLaser(int index, const assessment::LaserAssessment* current);
     [[nodiscard]] int assessmentCount() const;
 
 private:
@@ -31,7 +32,7 @@ private:
 
     LabDocument* m_document = nullptr;
     int m_laser = -1;
-    std::optional<assessment::LaserAssessment> m_current;
+    const assessment::LaserAssessment* m_current = nullptr;
     QLabel* m_title = nullptr;
     QTreeWidget* m_list = nullptr;
     QPushButton* m_record = nullptr;

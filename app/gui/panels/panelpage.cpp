@@ -1,6 +1,7 @@
 #include "panels/panelpage.hpp"
 
 #include "widgets/palette.hpp"
+#include "widgets/wrappedlabel.hpp"
 
 #include <QLabel>
 #include <QVBoxLayout>
@@ -41,8 +42,8 @@ PanelPage::PanelPage(Panel panel, QWidget* parent) : QWidget(parent), m_panel(pa
     headingFont.setBold(true);
     heading->setFont(headingFont);
 
-    auto* purpose = new QLabel(panelPurpose(panel), this);
-    purpose->setWordWrap(true);
+    auto* purpose = new WrappedLabel(this);
+    purpose->setText(panelPurpose(panel));
     purpose->setStyleSheet(QStringLiteral("color: %1;").arg(palette::kNavy.name()));
 
     auto* empty = new QLabel(emptyStateText(panel), this);

@@ -1,5 +1,6 @@
 #include "plots/chartwidget.hpp"
 
+#include "plots/plotgrid.hpp"
 #include "widgets/palette.hpp"
 
 #include <QAreaSeries>
@@ -31,6 +32,7 @@ namespace {
 const QColor kGrid{0xDD, 0xE3, 0xEA};
 const QColor kAxisLine{0x8A, 0x94, 0xA3};
 constexpr qreal kLabelZ = 20;
+constexpr qreal kGridZ = 2; // above the plot area's background, below the axes and series (the library's order)
 const QSize kExportMinimum{1000, 620};
 constexpr int kExportPixelRatio = 2;
 
@@ -94,6 +96,9 @@ ChartWidget::ChartWidget(QWidget* parent) : QWidget(parent)
     m_chart->legend()->setFont(scaledFont(font(), 0.9));
     m_chart->legend()->setLabelColor(palette::kInk);
 
+    m_gridItem = new PlotGrid(kGrid, kAxisLine, m_chart);
+    m_gridItem->setZValue(kGridZ);
+
     m_view = new QChartView(m_chart, this);
     m_view->setRenderHint(QPainter::Antialiasing);
     m_view->setFrameShape(QFrame::NoFrame);
@@ -106,6 +111,7 @@ ChartWidget::ChartWidget(QWidget* parent) : QWidget(parent)
     connect(m_chart, &QChart::plotAreaChanged, this, [this] {
         updateDecadeLabels();
         placeLabels();
+        updateGrid();
     });
 }
 
@@ -125,27 +131,47 @@ void ChartWidget::clear()
         delete axis;
     }
     m_drawn.clear();
+    m_gridItem->setLines({}, {});
+    m_guides.clear();
     m_x = {};
     m_y = {};
     m_title.clear();
     m_chart->setTitle({});
+    m_shape = {};
+    m_hasContent = false;
 }
 
 void ChartWidget::setContent(const ChartContent& content)
 {
+    Shape shape = shapeOf(content);
+    if (m_hasContent && shape == m_shape) {
+        refresh(content);
+        return;
+    }
     clear();
+    rebuild(content);
+    m_shape = std::move(shape);
+    m_hasContent = true;
+}
+
+void ChartWidget::setTitles(const ChartContent& content)
+{
     m_title = content.title;
     QString title = content.title.toHtmlEscaped();
     if (!content.subtitle.isEmpty())
         title += QStringLiteral("<br><span style=\"font-weight: normal; font-size: small;\">%1</span>")
                      .arg(content.subtitle.toHtmlEscaped());
-    m_chart->setTitle(title);
+    if (m_chart->title() != title) // the title is rich text: laying it out again is not free
+        m_chart->setTitle(title);
+}
 
+void ChartWidget::rebuild(const ChartContent& content)
+{
+    setTitles(content);
     m_x.spec = content.x;
     m_y.spec = content.y;
     m_chart->addAxis(makeAxis(m_x, Qt::Horizontal), Qt::AlignBottom);
     m_chart->addAxis(makeAxis(m_y, Qt::Vertical), Qt::AlignLeft);
-    addDecadeGrid();
 
     for (const ChartCurve& curve : content.curves)
         addCurve(curve);
@@ -157,13 +183,12 @@ void ChartWidget::setContent(const ChartContent& content)
         addLabel(label);
     updateDecadeLabels();
     placeLabels();
+    updateGrid();
 }
 
 QPointF ChartWidget::toChart(QPointF value) const
 {
-    const double x = m_x.spec.scale == AxisScale::Log10 ? std::log10(value.x()) : value.x();
-    const double y = m_y.spec.scale == AxisScale::Log10 ? std::log10(value.y()) : value.y();
-    return {x, y};
+    return toChart(value, m_x.spec, m_y.spec);
 }
 
 QPointF ChartWidget::fromChart(QPointF chart) const
@@ -182,33 +207,43 @@ QAbstractAxis* ChartWidget::makeAxis(AxisState& state, Qt::Orientation orientati
         // decade carry words such as "1 ns" or "10 cm".
         auto* categories = new QCategoryAxis;
         categories->setLabelsPosition(QCategoryAxis::AxisLabelsPositionOnValue);
-        categories->setRange(std::log10(spec.min), std::log10(spec.max));
-        categories->setStartValue(std::log10(spec.min));
         axis = categories;
     } else {
         auto* values = new QValueAxis;
-        values->setRange(spec.min, spec.max);
-        const double interval = spec.tickInterval > 0
-                                    ? spec.tickInterval
-                                    : niceInterval(spec.max - spec.min, orientation == Qt::Horizontal ? 8 : 5);
         values->setTickType(QValueAxis::TicksDynamic);
         values->setTickAnchor(0);
-        values->setTickInterval(interval);
-        values->setLabelFormat(interval >= 1 ? QStringLiteral("%.0f") : QStringLiteral("%.2g"));
         values->setMinorTickCount(0);
         axis = values;
     }
+    state.axis = axis;
+    setAxisRange(state, orientation);
     axis->setTruncateLabels(false); // our labels are short words; "…" would hide them
     axis->setTitleText(spec.title);
     axis->setTitleFont(scaledFont(font(), 0.95));
     axis->setTitleBrush(palette::kInk);
     axis->setLabelsFont(scaledFont(font(), 0.85));
     axis->setLabelsColor(palette::kInk);
-    axis->setGridLineColor(kGrid);
-    axis->setLinePenColor(kAxisLine);
-    state.axis = axis;
+    axis->setGridLineVisible(false); // PlotGrid draws the grid, the axis line and the ticks
+    axis->setLineVisible(false);
     state.step = 0;
     return axis;
+}
+
+void ChartWidget::setAxisRange(AxisState& state, Qt::Orientation orientation)
+{
+    const ChartAxis& spec = state.spec;
+    if (auto* categories = qobject_cast<QCategoryAxis*>(state.axis)) {
+        categories->setRange(std::log10(spec.min), std::log10(spec.max));
+        categories->setStartValue(std::log10(spec.min));
+    } else if (auto* values = qobject_cast<QValueAxis*>(state.axis)) {
+        values->setRange(spec.min, spec.max);
+        const double interval = spec.tickInterval > 0
+                                    ? spec.tickInterval
+                                    : niceInterval(spec.max - spec.min, orientation == Qt::Horizontal ? 8 : 5);
+        values->setTickInterval(interval);
+        state.interval = interval;
+        values->setLabelFormat(interval >= 1 ? QStringLiteral("%.0f") : QStringLiteral("%.2g"));
+    }
 }
 
 void ChartWidget::updateDecadeLabels()
@@ -235,38 +270,10 @@ void ChartWidget::updateLogAxis(AxisState& state, double extentPx, double pxPerL
     for (const QString& label : axis->categoriesLabels())
         axis->remove(label);
     // Only labelled decades are categories (the library hides a label that overlaps its neighbour, blank or not);
-    // the decades between them get their grid lines from addDecadeGrid().
+    // every decade gets its grid line from updateGrid().
     for (int e = first; e <= last; ++e) {
         if (((e % step) + step) % step == 0)
             axis->append(decadeLabel(e, state.spec.ticks), e);
-    }
-}
-
-void ChartWidget::addDecadeGrid()
-{
-    const auto range = [](const ChartAxis& spec) {
-        return spec.scale == AxisScale::Log10 ? std::pair{std::log10(spec.min), std::log10(spec.max)}
-                                              : std::pair{spec.min, spec.max};
-    };
-    const auto [x0, x1] = range(m_x.spec);
-    const auto [y0, y1] = range(m_y.spec);
-    const QPen pen(kGrid, 1.0);
-    auto add = [&](QPointF a, QPointF b) {
-        auto* line = new QLineSeries;
-        line->append(a);
-        line->append(b);
-        line->setPen(pen);
-        attach(line);
-        for (QLegendMarker* marker : m_chart->legend()->markers(line))
-            marker->setVisible(false);
-    };
-    if (m_x.spec.scale == AxisScale::Log10) {
-        for (int e = static_cast<int>(std::ceil(x0 - 1e-9)); e <= static_cast<int>(std::floor(x1 + 1e-9)); ++e)
-            add(QPointF(e, y0), QPointF(e, y1));
-    }
-    if (m_y.spec.scale == AxisScale::Log10) {
-        for (int e = static_cast<int>(std::ceil(y0 - 1e-9)); e <= static_cast<int>(std::floor(y1 + 1e-9)); ++e)
-            add(QPointF(x0, e), QPointF(x1, e));
     }
 }
 
@@ -281,19 +288,8 @@ void ChartWidget::attach(QXYSeries* series)
 
 void ChartWidget::addCurve(const ChartCurve& curve)
 {
-    // Split at breaks: each finite run is drawn as its own piece, only the first named in the legend.
-    std::vector<QList<QPointF>> runs(1);
-    for (const QPointF& p : curve.points) {
-        const QPointF c = isFinite(p) ? toChart(p) : QPointF(std::nan(""), 0);
-        if (isFinite(c)) {
-            runs.back().append(c);
-        } else if (!runs.back().isEmpty()) {
-            runs.emplace_back();
-        }
-    }
-    if (runs.back().isEmpty())
-        runs.pop_back();
-
+    // Each finite run is drawn as its own piece, only the first named in the legend.
+    const std::vector<QList<QPointF>> runs = piecesOf(curve, m_x.spec, m_y.spec);
     QPen pen(curve.colour, curve.width, penStyle(curve.style), Qt::FlatCap, Qt::MiterJoin);
     Drawn drawn{curve.name, {}};
     for (std::size_t i = 0; i < runs.size(); ++i) {
@@ -345,6 +341,7 @@ void ChartWidget::addGuide(const ChartGuide& guide)
     line->append(x, y1);
     line->setPen(QPen(guide.colour, 1.5, Qt::DashLine));
     attach(line);
+    m_guides.push_back(line);
     for (QLegendMarker* marker : m_chart->legend()->markers(line))
         marker->setVisible(false);
 }

@@ -18,6 +18,43 @@ namespace {
 
 constexpr double kNarrowBand_nm = 4; // a single line drawn this wide so it can be seen
 constexpr int kOdSamples = 700;
+// More curves than this make an unreadable legend, and a site's shelf can hold thousands of items: the chart shows
+// the items that protect best against this case.
+constexpr std::size_t kMaxShelfCurves = 8;
+
+// The shelf items to draw, in shelf order: all of a small shelf; of a large one, those covering this output and
+// case first, then those that cannot tell, then the others. `outcomes` are in shelf order (assessment.hpp).
+std::vector<std::size_t> itemsToDraw(const std::vector<model::EyewearItem>& shelf,
+                                     const std::vector<assessment::EyewearOutcome>& outcomes,
+                                     const std::string& outputName, const std::string& caseName)
+{
+    std::vector<std::size_t> chosen(shelf.size());
+    for (std::size_t i = 0; i < shelf.size(); ++i)
+        chosen[i] = i;
+    if (shelf.size() <= kMaxShelfCurves)
+        return chosen;
+    const auto rank = [&](std::size_t i) {
+        if (i >= outcomes.size() || outcomes[i].itemName != shelf[i].name)
+            return 3;
+        for (const eyewear::OutputCheck& check : outcomes[i].check.outputs) {
+            if (check.outputName == outputName && check.caseName == caseName)
+                return check.verdict == eyewear::Verdict::Covers       ? 0
+                       : check.verdict == eyewear::Verdict::CannotTell ? 1
+                                                                       : 2;
+        }
+        return 3;
+    };
+    std::vector<std::pair<int, std::size_t>> ranked;
+    ranked.reserve(shelf.size());
+    for (std::size_t i = 0; i < shelf.size(); ++i)
+        ranked.emplace_back(rank(i), i);
+    std::partial_sort(ranked.begin(), ranked.begin() + static_cast<std::ptrdiff_t>(kMaxShelfCurves), ranked.end());
+    chosen.clear();
+    for (std::size_t k = 0; k < kMaxShelfCurves; ++k)
+        chosen.push_back(ranked[k].second);
+    std::sort(chosen.begin(), chosen.end());
+    return chosen;
+}
 
 } // namespace
 
@@ -83,7 +120,8 @@ ChartContent LimitCurveContent::odAgainstWavelength(const assessment::CaseAssess
                                              LineStyle::Dotted};
     QStringList absent;
     QStringList unreadable;
-    for (std::size_t i = 0; i < shelf.size(); ++i) {
+    const std::vector<std::size_t> drawn = itemsToDraw(shelf, outcomes, outputName, exposureCase.name);
+    for (const std::size_t i : drawn) {
         const model::EyewearItem& item = shelf[i];
         const auto parsed = eyewear::parseEyewear(item);
         if (!parsed) {
@@ -123,8 +161,12 @@ ChartContent LimitCurveContent::odAgainstWavelength(const assessment::CaseAssess
             continue;
         }
         top = std::max(top, itemTop);
-        const auto outcome = std::find_if(outcomes.begin(), outcomes.end(),
-                                          [&](const assessment::EyewearOutcome& o) { return o.itemName == item.name; });
+        // The outcome of item i is at i (shelf order); searched by name only if the two lists disagree.
+        const auto outcome =
+            i < outcomes.size() && outcomes[i].itemName == item.name
+                ? outcomes.begin() + static_cast<std::ptrdiff_t>(i)
+                : std::find_if(outcomes.begin(), outcomes.end(),
+                               [&](const assessment::EyewearOutcome& o) { return o.itemName == item.name; });
         if (outcome != outcomes.end()) {
             for (const eyewear::OutputCheck& check : outcome->check.outputs) {
                 if (check.outputName == outputName && check.caseName == exposureCase.name) {
@@ -146,6 +188,9 @@ ChartContent LimitCurveContent::odAgainstWavelength(const assessment::CaseAssess
         notes.append(tr("No OD data from %1 to %2 nm: %3.").arg(xmin).arg(xmax).arg(absent.join(QStringLiteral(", "))));
     if (!unreadable.isEmpty())
         notes.append(tr("Markings that could not be read: %1.").arg(unreadable.join(QStringLiteral(", "))));
+    if (drawn.size() < shelf.size())
+        notes.append(
+            tr("%1 of the %2 shelf items shown, those that protect best first.").arg(drawn.size()).arg(shelf.size()));
     content.subtitle = notes.join(QChar(u' '));
     content.x = ChartAxis{tr("Wavelength (nm)"), AxisScale::Linear, TickStyle::Plain, xmin, xmax, 0};
     const double ymax = std::ceil(top) + 1;

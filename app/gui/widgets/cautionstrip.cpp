@@ -2,6 +2,7 @@
 
 #include "beamwarden/caution.hpp"
 #include "widgets/palette.hpp"
+#include "widgets/wrappedlabel.hpp"
 
 #include <QCoreApplication>
 #include <QHBoxLayout>
@@ -31,9 +32,8 @@ CautionStrip::CautionStrip(QWidget* parent) : QFrame(parent)
     m_icon->setFont(iconFont);
     m_icon->setAlignment(Qt::AlignTop);
 
-    m_text = new QLabel(this);
+    m_text = new WrappedLabel(this); // always shown, so laid out on every change in the window
     m_text->setObjectName(QStringLiteral("cautionText"));
-    m_text->setWordWrap(true);
     m_text->setTextInteractionFlags(Qt::TextSelectableByMouse);
 
     m_foldButton = new QToolButton(this);

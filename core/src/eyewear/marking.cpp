@@ -18,6 +18,8 @@ namespace beamwarden::eyewear {
 namespace {
 
 constexpr std::string_view kField = "marking";
+// Real markings run to a few dozen characters; this bounds a pasted page, not any marking.
+constexpr std::size_t kMaxPrintedLength = 500;
 
 std::string trim(std::string_view s)
 {
@@ -243,8 +245,12 @@ Result<En207Marking> parseEn207(std::string_view text)
     const std::string line = normalise(trim(text));
     if (line.empty())
         return fail(std::string(kField), "", "an EN 207 marking such as '1064 D LB7 + I LB8'");
-    if (line.size() > 500)
-        return fail(std::string(kField), line.substr(0, 40) + "...", "a marking of at most 500 characters");
+    // The limit holds for the marking as format() prints it, since that is what is stored and read back: "+I L8"
+    // prints as " + I LB8", so a typed line under the limit can print over it. The typed line only gets a looser
+    // bound, to keep the work per line small.
+    if (line.size() > 4 * kMaxPrintedLength)
+        return fail(std::string(kField), line.substr(0, 40) + "...",
+                    fmt::format("a marking of at most {} characters", kMaxPrintedLength));
     En207Marking marking;
     std::size_t start = 0;
     while (start <= line.size()) {
@@ -259,6 +265,11 @@ Result<En207Marking> parseEn207(std::string_view text)
             break;
         start = plus + 1;
     }
+    if (const std::string printed = format(marking); printed.size() > kMaxPrintedLength)
+        return fail(std::string(kField), line.substr(0, 40) + "...",
+                    fmt::format("a marking of at most {} characters as printed ('1064 D LB7 + I LB8'); this one "
+                                "prints as {} characters",
+                                kMaxPrintedLength, printed.size()));
     return marking;
 }
 

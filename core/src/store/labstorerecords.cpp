@@ -190,4 +190,21 @@ Result<LabContents> LabStore::contents()
     return LabContents{std::move(*lab), std::move(*lasers), std::move(*eyewear), std::move(*assessments)};
 }
 
+Result<LabContents> LabStore::records()
+{
+    auto snapshot = Transaction::beginRead(m_db);
+    if (!snapshot)
+        return std::unexpected(snapshot.error());
+    auto lab = readLab(m_db);
+    auto lasers = readLasers(m_db);
+    auto eyewear = readEyewear(m_db);
+    if (!lab)
+        return std::unexpected(lab.error());
+    if (!lasers)
+        return std::unexpected(lasers.error());
+    if (!eyewear)
+        return std::unexpected(eyewear.error());
+    return LabContents{std::move(*lab), std::move(*lasers), std::move(*eyewear), {}};
+}
+
 } // namespace beamwarden::store

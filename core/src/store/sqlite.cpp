@@ -17,8 +17,8 @@ namespace {
 // Long enough for another Beamwarden window to finish a save; short enough that a stuck writer is reported.
 constexpr int kBusyTimeoutMs = 5000;
 
-// A lab file removed or replaced while open: in WAL mode SQLite goes on committing into the journal beside the old
-// path and reports success for records that no file at the path holds. SQLITE_FCNTL_HAS_MOVED compares the open
+// A lab file moved, removed or replaced while open: in WAL mode SQLite goes on committing into the journal beside the
+// old path and reports success for records that no file at the path holds. SQLITE_FCNTL_HAS_MOVED compares the open
 // file with what the path names now (unix VFS: missing, or another inode).
 Result<void> requireFileInPlace(sqlite3* db)
 {

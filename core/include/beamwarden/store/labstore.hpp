@@ -98,6 +98,9 @@ public:
 
     // Everything in the file, for export.
     [[nodiscard]] Result<LabContents> contents();
+    // The lab, its lasers and its eyewear from one snapshot, without the assessments: what the desktop application
+    // keeps in memory, reading a laser's history when it is shown (years of stored results would not fit).
+    [[nodiscard]] Result<LabContents> records();
 
     // A consistent copy of the open file at `outPath` (SQLite's online backup); refuses an existing path.
     [[nodiscard]] Result<void> backup(const std::filesystem::path& outPath);
