@@ -23,8 +23,8 @@ ChartContent content(double scale, int curves, const QString& title)
         c.curves.push_back(curve);
     }
     c.markers.push_back(ChartMarker{QStringLiteral("mark"), Qt::red, MarkerShape::Circle, QPointF(1e-6, 2 * scale)});
-    c.labels.push_back(ChartLabel{QStringLiteral("label %1").arg(scale), Qt::black, QPointF(1e-7, scale),
-                                  LabelPlacement::Above});
+    c.labels.push_back(
+        ChartLabel{QStringLiteral("label %1").arg(scale), Qt::black, QPointF(1e-7, scale), LabelPlacement::Above});
     return c;
 }
 

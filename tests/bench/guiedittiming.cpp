@@ -129,6 +129,8 @@ EditTimes timeWavelengthEdits(gui::MainWindow& window, gui::Panel panel, double 
             times.problem = QStringLiteral("nothing was repainted after the edit");
             return times;
         }
+        if (i == 0)
+            times.firstMs = ms;
         if (i >= warmUp) {
             times.ms.push_back(ms);
             times.cpuMs.push_back(cpuMs);

@@ -17,6 +17,7 @@ struct EditTimes {
     std::vector<double> ms;    // wall time, one per timed edit
     std::vector<double> cpuMs; // this thread's processor time over the same span: what the work costs without
                                // waiting for the disk or for other programs on a busy machine
+    double firstMs = -1;       // the very first edit (a warm-up one): what a lab's first change costs
     QString problem;           // empty, or why the edits could not be timed (an edit that did not take effect)
 };
 

@@ -68,8 +68,8 @@ TEST_CASE("Damage in the history is refused at the first write that touches it, 
     REQUIRE_FALSE(saved.has_value());
     CHECK(saved.error().field == "lab file");
     CHECK_THAT(saved.error().message(), Catch::Contains("damaged") || Catch::Contains("malformed"));
-    auto signedOff = store->signOff(1, model::SignOff{0, "A. Tester", "", model::AssessmentStatus::Draft,
-                                                       model::AssessmentStatus::InReview, ""});
+    auto signedOff = store->signOff(
+        1, model::SignOff{0, "A. Tester", "", model::AssessmentStatus::Draft, model::AssessmentStatus::InReview, ""});
     CHECK_FALSE(signedOff.has_value());
     CHECK(storetest::fileBytes(path) == damaged);
 
