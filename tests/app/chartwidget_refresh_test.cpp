@@ -1,5 +1,5 @@
 // ChartWidget moves content of the same shape into the items it has (an edit's new numbers) and rebuilds for any
-// other: both must show exactly the content given.
+// other: both must show exactly the content given. The numbers are the test's own inputs (computed), read back.
 #include "plots/chartwidget.hpp"
 
 #include <catch2/catch.hpp>
